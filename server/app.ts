@@ -1,0 +1,60 @@
+import express, { type Express } from 'express';
+import helmet from 'helmet';
+import { existsSync } from 'node:fs';
+import { resolve } from 'node:path';
+import { getConfig } from './config';
+import { getSequelize } from './db';
+import { sessionMiddleware } from './http/session';
+import { requireCsrfToken } from './http/csrf';
+import { errorHandler } from './http/error-handler';
+import { configurePassport } from './auth/passport';
+import { apiRouter } from './routes';
+
+const clientDir = resolve(import.meta.dirname, '../dist');
+
+/** The Express app: security headers, body parsing, sessions, CSRF, the API, and the built client. */
+export function createApp(): Express {
+  const config = getConfig();
+  const app = express();
+  app.disable('x-powered-by');
+  if (config.TRUST_PROXY === '1') app.set('trust proxy', 1);
+
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          defaultSrc: ["'self'"],
+          // pdf.js runs its worker from our own origin (a module worker built by Vite).
+          workerSrc: ["'self'", 'blob:'],
+          scriptSrc: ["'self'"],
+          styleSrc: ["'self'", "'unsafe-inline'"],
+          imgSrc: ["'self'", 'data:', 'blob:'],
+          fontSrc: ["'self'", 'data:'],
+          connectSrc: ["'self'"],
+          objectSrc: ["'none'"],
+          frameAncestors: ["'none'"],
+          upgradeInsecureRequests: null,
+        },
+      },
+      crossOriginEmbedderPolicy: false,
+    }),
+  );
+  app.use(express.json({ limit: '1mb' }));
+  app.use(express.urlencoded({ extended: false, limit: '100kb' }));
+
+  const sequelize = getSequelize();
+  const passport = configurePassport();
+  app.use(sessionMiddleware(sequelize, config));
+  app.use(passport.session());
+  app.use(requireCsrfToken);
+
+  app.use('/api', apiRouter());
+
+  if (existsSync(clientDir)) {
+    app.use(express.static(clientDir, { index: false, maxAge: '1h' }));
+    app.get(/^(?!\/api\/).*/, (_req, res) => res.sendFile(resolve(clientDir, 'index.html')));
+  }
+
+  app.use(errorHandler);
+  return app;
+}

@@ -1,0 +1,36 @@
+import { createServer, type Server } from 'node:http';
+import { getConfig } from './config';
+import { createApp } from './app';
+import { closeSequelize, getSequelize } from './db';
+import { migrateToLatest } from './migrator';
+import { startBackgroundWork } from './background';
+
+export interface RunningApp {
+  url: string;
+  server: Server;
+  close(): Promise<void>;
+}
+
+/** Migrates, then serves the app and runs its background work until `close()`. */
+export async function startWindway(options: { migrate?: boolean } = {}): Promise<RunningApp> {
+  const config = getConfig();
+  if (options.migrate !== false) await migrateToLatest(getSequelize());
+  const server = createServer(createApp());
+  await new Promise<void>((resolve, reject) => {
+    server.once('error', reject);
+    server.listen(config.PORT, config.HOST, () => resolve());
+  });
+  const address = server.address();
+  const port = typeof address === 'object' && address ? address.port : config.PORT;
+  const stopBackground = startBackgroundWork();
+  return {
+    url: `http://${config.HOST}:${port}`,
+    server,
+    async close() {
+      await stopBackground();
+      server.closeAllConnections();
+      await new Promise<void>((resolve) => server.close(() => resolve()));
+      await closeSequelize();
+    },
+  };
+}

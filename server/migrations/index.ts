@@ -1,0 +1,11 @@
+import type { Migration } from './types';
+import * as m0001 from './0001-users-and-sessions';
+
+/**
+ * The schema's history, in order. Each entry is reversible (`down` undoes `up`).
+ * Add a file `NNNN-what-it-does.ts` exporting `up` and `down`, then list it here;
+ * never edit a migration that has landed.
+ */
+export const migrations: { name: string; up: Migration; down: Migration }[] = [
+  { name: '0001-users-and-sessions', ...m0001 },
+];

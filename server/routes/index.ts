@@ -1,0 +1,18 @@
+import { Router } from 'express';
+import { healthRouter } from './health';
+import { authRouter } from './auth';
+import { usersRouter } from './users';
+import { apiNotFound } from '../http/error-handler';
+
+/**
+ * The API under /api. Each resource has its own folder with a router factory;
+ * mount it here. The authorization-matrix test reads this router's routes.
+ */
+export function apiRouter(): Router {
+  const router = Router();
+  router.use('/health', healthRouter());
+  router.use('/auth', authRouter());
+  router.use('/users', usersRouter());
+  router.use(apiNotFound);
+  return router;
+}

@@ -1,0 +1,101 @@
+import { createBrowserRouter, type RouteObject } from 'react-router-dom';
+import { PageSpinner } from '@/components/spinner';
+import { RequireRole } from '@/features/auth/components/require-role';
+import { adminRoles, contributorRoles, editorRoles } from '@/lib/roles';
+import { Layout } from './layout';
+import { RouteError } from './route-error';
+
+/** A lazy route module that renders the "being built" page under the given title. */
+function placeholder(title: string, description?: string): RouteObject['lazy'] {
+  return async () => {
+    const { PlaceholderPage } = await import('./placeholder-page');
+    return { Component: () => <PlaceholderPage title={title} description={description} /> };
+  };
+}
+
+/*
+ * Every page is a lazy route module exporting `Component`:
+ *   { path: 'sources', lazy: () => import('@/features/sources/routes/sources') }
+ * Guards are layout routes: <RequireRole roles={...} /> renders its child routes.
+ */
+export const routes: RouteObject[] = [
+  {
+    path: '/',
+    element: <Layout />,
+    errorElement: <RouteError />,
+    hydrateFallbackElement: <PageSpinner />,
+    children: [
+      {
+        // Errors in a page render inside the layout, so navigation stays usable.
+        errorElement: <RouteError />,
+        children: [
+          { index: true, lazy: () => import('@/features/home/routes/home') },
+
+          // ---- Account
+          { path: 'sign-in', lazy: () => import('@/features/auth/routes/sign-in') },
+          { path: 'register', lazy: () => import('@/features/auth/routes/register') },
+          { path: 'forgot-password', lazy: () => import('@/features/auth/routes/forgot-password') },
+          { path: 'reset-password', lazy: () => import('@/features/auth/routes/reset-password') },
+          {
+            element: <RequireRole section="Your account" />,
+            children: [{ path: 'account', lazy: () => import('@/features/auth/routes/account') }],
+          },
+
+          // ---- Admin
+          {
+            path: 'admin',
+            element: <RequireRole roles={adminRoles} section="Admin" />,
+            children: [
+              { index: true, lazy: () => import('@/features/admin/routes/admin-home') },
+              { path: 'users', lazy: () => import('@/features/admin/routes/users') },
+              { path: 'outbox', lazy: () => import('@/features/admin/routes/outbox') },
+              { path: 'reindex', lazy: () => import('@/features/admin/routes/reindex') },
+            ],
+          },
+
+          // ======== SECTIONS BUILT BY OTHER ENGINEERS — swap `placeholder(...)` for your route module ========
+          // e.g. { index: true, lazy: () => import('@/features/search/routes/search') }
+          // Add sub-pages (e.g. { path: ':id/edit', lazy: ... }) next to the index route. Keep the guards.
+          { path: 'search', children: [{ index: true, lazy: placeholder('Search') }] },
+          {
+            path: 'sources',
+            children: [
+              { index: true, lazy: placeholder('Sources') },
+              { path: ':id', lazy: placeholder('Source') },
+            ],
+          },
+          { path: 'excerpts/:id', lazy: placeholder('Excerpt') },
+          { path: 'concordance', children: [{ index: true, lazy: placeholder('Concordance') }] },
+          { path: 'reckoner', children: [{ index: true, lazy: placeholder('Pitch & size reckoner') }] },
+          {
+            path: 'programmes',
+            element: <RequireRole section="Programmes" />,
+            children: [{ index: true, lazy: placeholder('Programmes') }],
+          },
+          {
+            path: 'contribute',
+            element: <RequireRole roles={contributorRoles} section="Contribute" />,
+            children: [{ index: true, lazy: placeholder('Contribute') }],
+          },
+          {
+            path: 'submissions',
+            element: <RequireRole roles={contributorRoles} section="My submissions" />,
+            children: [{ index: true, lazy: placeholder('My submissions') }],
+          },
+          {
+            path: 'review',
+            element: <RequireRole roles={editorRoles} section="Review" />,
+            children: [{ index: true, lazy: placeholder('Review') }],
+          },
+          // ======== END OF SECTIONS BUILT BY OTHER ENGINEERS ========
+
+          { path: '*', lazy: () => import('./not-found-page') },
+        ],
+      },
+    ],
+  },
+];
+
+export function createAppRouter() {
+  return createBrowserRouter(routes);
+}
