@@ -10,7 +10,7 @@
 import { defaultSettings, attrMatches, type Settings } from './settings';
 import { Bitset, Posting, growF64, growI32, growU32 } from './structs';
 import { FacetField, SortField, getPath } from './facet-index';
-import { fold, words } from './normalize';
+import { words } from './normalize';
 
 export type Doc = Record<string, unknown>;
 
@@ -67,6 +67,7 @@ export class SearchIndex {
   /** Rebuilds settings-derived lookups (normalised the same way as text). */
   applyDerived(): void {
     const s = this.settings;
+    if (!s.searchableAttributes.includes('*')) this.fields = [...s.searchableAttributes];
     this.stopSet = new Set(s.stopWords.flatMap((w) => words(w)));
     this.noTypoWords = new Set(s.typoTolerance.disableOnWords.flatMap((w) => words(w)));
     this.synonyms = new Map();
@@ -94,6 +95,17 @@ export class SearchIndex {
       if (!attrMatches(this.settings.filterableAttributes, path)) return null;
       f = this.fillField(new FacetField(path));
       this.facets.set(path, f);
+    }
+    return f;
+  }
+
+  /** The sort structure for a sortable path, built on first use for nested or pattern-matched paths. */
+  sortField(path: string): SortField | null {
+    let f = this.sorts.get(path);
+    if (!f) {
+      if (!attrMatches(this.settings.sortableAttributes, path)) return null;
+      f = this.fillField(new SortField(path));
+      this.sorts.set(path, f);
     }
     return f;
   }
@@ -137,7 +149,8 @@ export class SearchIndex {
     return this.sortedIds;
   }
 
-  private indexText(slot: number, doc: Doc): void {
+  /** Searchable text of a document as [attribute rank, strings] pairs. */
+  fieldTexts(doc: Doc): [number, string[]][] {
     const s = this.settings.searchableAttributes;
     const parts: [number, string[]][] = [];
     if (s.includes('*')) {
@@ -146,6 +159,11 @@ export class SearchIndex {
       if (this.fields.length !== s.length) this.fields = [...s];
       s.forEach((a, i) => { const { present, value } = getPath(doc, a); if (present) { const out: string[] = []; textLeaves(value, out); if (out.length) parts.push([i, out]); } });
     }
+    return parts;
+  }
+
+  private indexText(slot: number, doc: Doc): void {
+    const parts = this.fieldTexts(doc);
     let len = 0;
     for (const [rank, texts] of parts) {
       const bit = 1 << Math.min(rank, 15);
@@ -252,4 +270,3 @@ export async function rebuild(old: SearchIndex, settings: Settings, yieldFn: () 
   return n;
 }
 
-export { fold };

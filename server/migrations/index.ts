@@ -1,5 +1,6 @@
 import type { Migration } from './types';
 import * as m0001 from './0001-users-and-sessions';
+import * as m0002 from './0002-catalogue';
 
 /**
  * The schema's history, in order. Each entry is reversible (`down` undoes `up`).
@@ -8,4 +9,5 @@ import * as m0001 from './0001-users-and-sessions';
  */
 export const migrations: { name: string; up: Migration; down: Migration }[] = [
   { name: '0001-users-and-sessions', ...m0001 },
+  { name: '0002-catalogue', ...m0002 },
 ];

@@ -1,7 +1,7 @@
 import { ReckonerError } from './errors';
 import { assertValidDate, daysInMonth, julianDayNumber, modernYearFromLadyDay, type CalendarDate, type CalendarName } from './calendar';
 import { mod } from './notes';
-import { datePrecision, digitPattern, hasUnspecifiedDigits, qualifiedPart, type EdtfNode, type PointNode, type SetMember } from './edtf-tree';
+import { datePrecision, digitPattern, hasUnspecifiedDigits, isPoint, qualifiedPart, type EdtfNode, type PointNode, type SetMember } from './edtf-tree';
 
 export type YearStart = 'jan1' | 'mar25';
 
@@ -31,9 +31,9 @@ export function boundsOf(tree: EdtfNode, reading: Reading, field = 'value'): Day
   switch (tree.type) {
     case 'Interval': {
       const [start, end] = tree.values;
-      const first = start ? pointBounds(start, reading, field).first : -Infinity;
-      const last = end ? pointBounds(end, reading, field).last : Infinity;
-      if (start && end && pointBounds(end, reading, field).last < pointBounds(start, reading, field).first) {
+      const first = isPoint(start) ? pointBounds(start, reading, field).first : -Infinity;
+      const last = isPoint(end) ? pointBounds(end, reading, field).last : Infinity;
+      if (isPoint(start) && isPoint(end) && pointBounds(end, reading, field).last < pointBounds(start, reading, field).first) {
         throw new ReckonerError(field, 'The interval ends before it begins: write the earlier date first, e.g. 1700/1725.');
       }
       return { first, last };

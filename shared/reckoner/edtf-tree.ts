@@ -20,7 +20,13 @@ export interface YearNode { type: 'Year'; values: [number] }
 export interface DecadeNode { type: 'Decade'; values: [number] }
 export interface CenturyNode { type: 'Century'; values: [number] }
 export type PointNode = DateNode | SeasonNode | YearNode | DecadeNode | CenturyNode;
-export interface IntervalNode { type: 'Interval'; values: [PointNode | null, PointNode | null] }
+/** An end is a point, Infinity when open ("../1760") or null when unknown ("/1760"). */
+export type IntervalEnd = PointNode | number | null;
+export interface IntervalNode { type: 'Interval'; values: [IntervalEnd, IntervalEnd] }
+
+export function isPoint(end: IntervalEnd): end is PointNode {
+  return end !== null && typeof end === 'object';
+}
 /** A member of a set: one date, or a consecutive range written `a..b`. */
 export type SetMember = PointNode | [PointNode, PointNode];
 export interface SetNode { type: 'Set' | 'List'; values: SetMember[]; earlier?: boolean; later?: boolean }
@@ -32,7 +38,7 @@ export interface ParsedEdtf {
   tree: EdtfNode;
   /** edtf's own serialisation, when it can build the value. */
   canonical: string;
-  /** For an interval: "1700/" (end unknown) rather than "1700/.." (open). */
+  /** For an interval: "/1760" or "1700/" (end unknown) rather than "../1760", "1700/.." (open). */
   unknownStart: boolean;
   unknownEnd: boolean;
 }
@@ -61,8 +67,8 @@ export function parseEdtf(value: string, field = 'value'): ParsedEdtf {
     input,
     tree,
     canonical,
-    unknownStart: tree.type === 'Interval' && input.startsWith('/'),
-    unknownEnd: tree.type === 'Interval' && input.endsWith('/'),
+    unknownStart: tree.type === 'Interval' && tree.values[0] === null,
+    unknownEnd: tree.type === 'Interval' && tree.values[1] === null,
   };
 }
 

@@ -55,15 +55,8 @@ export function MainNav({ role }: { role: Role | null }) {
       >
         {items.map((item) => (
           <li key={item.to}>
-            <NavLink to={item.to} className={linkClass} title={item.title}>
-              {item.title ? (
-                <>
-                  <span aria-hidden="true">{item.label}</span>
-                  <span className="sr-only">{item.title}</span>
-                </>
-              ) : (
-                item.label
-              )}
+            <NavLink to={item.to} className={linkClass} title={item.title} aria-label={item.title}>
+              {item.label}
             </NavLink>
           </li>
         ))}
