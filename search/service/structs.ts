@@ -83,19 +83,19 @@ export class Posting {
   bump(mask: number): void { const i = this.n - 1; this.masks[i] |= mask; if (this.tfs[i] < 65535) this.tfs[i]++; }
 }
 
-export function growF64(a: Float64Array, need: number, fill = NaN): Float64Array {
+export function growF64(a: Float64Array<ArrayBuffer>, need: number, fill = NaN): Float64Array<ArrayBuffer> {
   if (need <= a.length) return a;
   const b = new Float64Array(Math.max(need, a.length * 2)).fill(fill);
   b.set(a);
   return b;
 }
-export function growI32(a: Int32Array, need: number, fill = -1): Int32Array {
+export function growI32(a: Int32Array<ArrayBuffer>, need: number, fill = -1): Int32Array<ArrayBuffer> {
   if (need <= a.length) return a;
   const b = new Int32Array(Math.max(need, a.length * 2)).fill(fill);
   b.set(a);
   return b;
 }
-export function growU32(a: Uint32Array, need: number): Uint32Array {
+export function growU32(a: Uint32Array<ArrayBuffer>, need: number): Uint32Array<ArrayBuffer> {
   if (need <= a.length) return a;
   const b = new Uint32Array(Math.max(need, a.length * 2));
   b.set(a);

@@ -143,9 +143,11 @@ function widenRange(lo: CalendarDate, hi: CalendarDate, part: 'year' | 'month', 
     return [clampDay({ ...lo, year: lo.year - years }, calendar), clampDay({ ...hi, year: hi.year + years }, calendar)];
   }
   const months = QUALIFIED_DATE_MARGIN.months;
+  const later = monthAt(hi.year, hi.month + months);
+  const endsMonth = hi.day === daysInMonth(hi.year, hi.month, calendar);
   return [
     clampDay({ ...lo, ...monthAt(lo.year, lo.month - months) }, calendar),
-    clampDay({ ...hi, ...monthAt(hi.year, hi.month + months) }, calendar),
+    endsMonth ? { ...later, day: daysInMonth(later.year, later.month, calendar) } : clampDay({ ...hi, ...later }, calendar),
   ];
 }
 

@@ -48,7 +48,7 @@ export function resolveSizeDescription(description: string, field = 'description
   const [intervalText, referenceText] = direction.parts;
   const reference = findSizeByName(referenceText);
   if (!reference) {
-    throw new ReckonerError(field, `"${referenceText}" is not a size we know: use a slug or name such as alto, treble, tenor, descant, voice flute, bass.`);
+    throw new ReckonerError(field, `"${referenceText.replace(/^the /, '')}" is not a size we know: use a slug or name such as alto, treble, tenor, descant, voice flute, bass.`);
   }
   const interval = parseSpokenInterval(intervalText, field);
   const referenceMidi = nominalNote(reference).midi;

@@ -50,12 +50,12 @@ export function Layout() {
       <NavigationProgress />
       {session.demo && <DemoNotice />}
       <header role="banner" className="border-b border-rule bg-paper">
-        <div className="mx-auto flex max-w-page flex-wrap items-center justify-between gap-x-8 gap-y-3 px-4 py-3 sm:px-6">
+        <div className="mx-auto flex max-w-page flex-wrap items-center justify-between gap-x-8 gap-y-2 px-4 pt-3 pb-2 sm:px-6 md:pb-0">
           <Wordmark />
-          <MainNav role={session.role} />
-          <div className="ml-auto md:ml-0">
+          <div className="ml-auto">
             <AccountMenu user={session.user} pending={session.isPending} />
           </div>
+          <MainNav role={session.role} />
         </div>
       </header>
       {session.isError && (

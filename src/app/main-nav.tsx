@@ -6,7 +6,7 @@ import { visibleNav } from './navigation';
 
 const linkClass = ({ isActive }: { isActive: boolean }) =>
   cn(
-    'block border-b-2 px-1 py-2 text-[0.9375rem] font-medium no-underline md:py-1',
+    'block border-b-2 px-1 py-2 text-[0.9375rem] font-medium no-underline md:pb-2 md:pt-1.5',
     isActive ? 'border-accent text-ink' : 'border-transparent text-ink-muted hover:border-rule-strong hover:text-ink',
   );
 
@@ -23,7 +23,7 @@ export function MainNav({ role }: { role: Role | null }) {
   return (
     <nav
       aria-label="Main"
-      className="order-last w-full md:order-none md:w-auto"
+      className="order-last w-full"
       onKeyDown={(event) => {
         if (event.key === 'Escape' && open) {
           setOpen(false);
@@ -49,7 +49,7 @@ export function MainNav({ role }: { role: Role | null }) {
       <ul
         id={listId}
         className={cn(
-          'mt-2 flex-col gap-1 border-t border-rule pt-2 md:mt-0 md:flex md:flex-row md:flex-wrap md:gap-x-5 md:border-0 md:pt-0',
+          'mt-2 flex-col gap-1 border-t border-rule pt-2 md:mt-0 md:flex md:flex-row md:flex-wrap md:gap-x-6 md:pt-1',
           open ? 'flex' : 'hidden',
         )}
       >

@@ -2,6 +2,17 @@ import { describe, it, expect } from 'vitest';
 import { Note } from 'tonal';
 import { ReckonerError, midiToNote, noteToMidi, parseNote, pitchClassName, spellingAtFifths, fifthsOf } from '@shared/reckoner';
 
+/** The ReckonerError a call throws; fails the test when it throws nothing or something else. */
+function errorOf(call: () => unknown): ReckonerError {
+  try {
+    call();
+  } catch (error) {
+    if (error instanceof ReckonerError) return error;
+    throw error;
+  }
+  throw new Error('expected a ReckonerError');
+}
+
 describe('parseNote', () => {
   it('reads scientific pitch notation with ASCII and Unicode accidentals', () => {
     expect(noteToMidi('C4')).toBe(60); // MIDI 1.0 Detailed Specification — middle C is key 60 (from memory)
@@ -33,12 +44,9 @@ describe('parseNote', () => {
     for (const bad of ['H4', 'C', '4', 'C#', 'C44', '', 'Cq4']) {
       expect(() => parseNote(bad, 'lowest')).toThrow(ReckonerError);
     }
-    try {
-      parseNote('H4', 'lowest');
-    } catch (error) {
-      expect((error as ReckonerError).field).toBe('lowest');
-      expect((error as ReckonerError).message).toMatch(/C#4, Db4/);
-    }
+    const error = errorOf(() => parseNote('H4', 'lowest'));
+    expect(error.field).toBe('lowest');
+    expect(error.message).toMatch(/C#4, Db4/);
   });
 });
 

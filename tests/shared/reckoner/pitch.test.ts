@@ -6,6 +6,17 @@ import {
   nearestPitchStandard, noteFrequency, roundTo, validateA4,
 } from '@shared/reckoner';
 
+/** The ReckonerError a call throws; fails the test when it throws nothing or something else. */
+function errorOf(call: () => unknown): ReckonerError {
+  try {
+    call();
+  } catch (error) {
+    if (error instanceof ReckonerError) return error;
+    throw error;
+  }
+  throw new Error('expected a ReckonerError');
+}
+
 describe('noteFrequency', () => {
   it('puts a′ at 440 Hz by default', () => {
     expect(MODERN_A4_HZ).toBe(440); // ISO 16:1975 — standard tuning frequency
@@ -108,11 +119,7 @@ describe('a′ validation and standards', () => {
       expect(() => validateA4(bad)).toThrow(ReckonerError);
     }
     expect(() => validateA4(880)).toThrow(/350–500 Hz/);
-    try {
-      validateA4(880);
-    } catch (error) {
-      expect((error as ReckonerError).field).toBe('a');
-    }
+    expect(errorOf(() => validateA4(880)).field).toBe('a');
     expect(() => noteFrequency('A4', 220)).toThrow(ReckonerError);
   });
 

@@ -57,7 +57,7 @@ export function UsersTable({ users, sorting, onSortingChange, onUpdate, currentU
               options={roleOptions}
               disabled={user.id === currentUserId || user.id === savingUserId}
               onChange={(event) => onUpdate(user, { role: event.target.value as PublicUser['role'] })}
-              className="min-w-[9rem] py-1 text-sm"
+              className="min-h-0 min-w-[9rem] py-1 text-sm"
             />
           );
         },
@@ -101,6 +101,7 @@ export function UsersTable({ users, sorting, onSortingChange, onUpdate, currentU
     manualPagination: true,
     manualFiltering: true,
     enableMultiSort: false,
+    enableSortingRemoval: false,
     state: { sorting },
     onSortingChange,
   });

@@ -64,7 +64,7 @@ export function Component() {
 
   const onSortingChange = (updater: Updater<SortingState>) => {
     const next = typeof updater === 'function' ? updater(sorting) : updater;
-    setQuery({ sort: formatSort(next) ?? 'createdAt', page: undefined });
+    setQuery({ sort: formatSort(next), page: undefined });
   };
 
   const onUpdate = useCallback(
