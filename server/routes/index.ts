@@ -2,6 +2,7 @@ import { Router } from 'express';
 import { healthRouter } from './health';
 import { authRouter } from './auth';
 import { usersRouter } from './users';
+import { reckonRouter } from './reckon';
 import { apiNotFound } from '../http/error-handler';
 
 /**
@@ -13,6 +14,7 @@ export function apiRouter(): Router {
   router.use('/health', healthRouter());
   router.use('/auth', authRouter());
   router.use('/users', usersRouter());
+  router.use('/reckon', reckonRouter());
   router.use(apiNotFound);
   return router;
 }

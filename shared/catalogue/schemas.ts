@@ -95,11 +95,26 @@ export const sourceFieldsSchema = z
   .strict();
 
 export const createSourceSchema = sourceFieldsSchema;
+/**
+ * `.partial()` keeps `.default()`s, so a PATCH omitting `creators` or `mentions` would reset them:
+ * update schemas drop the defaults and leave absent fields absent.
+ */
+function partialWithoutDefaults<T extends z.ZodRawShape>(shape: T) {
+  const fields = Object.fromEntries(
+    Object.entries(shape).map(([key, field]) => [key, (field instanceof z.ZodDefault ? field.unwrap() : (field as z.ZodType)).optional()]),
+  );
+  return z.object(fields as { [K in keyof T]: z.ZodOptional<T[K] extends z.ZodDefault<infer I> ? I : T[K]> });
+}
+
+/** What every PATCH adds: the version it was based on, a reason, and (editors only) `publish` to keep approved material approved. */
+const updateMeta = {
+  version: z.number({ error: 'Send the version you edited' }).int().positive(),
+  reason: z.string().trim().max(500).optional(),
+  publish: z.boolean({ error: 'publish is true or false' }).optional(),
+};
+
 /** A PATCH carries the version it was based on (optimistic locking) and an optional reason. */
-export const updateSourceSchema = sourceFieldsSchema
-  .partial()
-  .extend({ version: z.number({ error: 'Send the version you edited' }).int().positive(), reason: z.string().trim().max(500).optional() })
-  .strict();
+export const updateSourceSchema = partialWithoutDefaults(sourceFieldsSchema.shape).extend(updateMeta).strict();
 
 export const mentionSchema = z
   .object({
@@ -149,11 +164,7 @@ const locatorRule = (value: { locatorType?: string; locatorValue?: string }, ctx
 };
 
 export const createExcerptSchema = excerptFieldsSchema.superRefine(locatorRule);
-export const updateExcerptSchema = excerptFieldsSchema
-  .partial()
-  .extend({ version: z.number({ error: 'Send the version you edited' }).int().positive(), reason: z.string().trim().max(500).optional() })
-  .strict()
-  .superRefine(locatorRule);
+export const updateExcerptSchema = partialWithoutDefaults(excerptFieldsSchema.shape).extend(updateMeta).strict().superRefine(locatorRule);
 
 export type SourceFields = z.output<typeof sourceFieldsSchema>;
 export type SourceInput = z.input<typeof sourceFieldsSchema>;

@@ -1,5 +1,5 @@
 import { Router, type Request } from 'express';
-import { rateLimit } from 'express-rate-limit';
+import { rateLimit, ipKeyGenerator } from 'express-rate-limit';
 import type { SessionResponse, AuthResponse } from '@shared/schemas/auth';
 import {
   loginSchema,
@@ -46,7 +46,7 @@ export function authRouter(): Router {
     skipSuccessfulRequests: true,
     standardHeaders: 'draft-7',
     legacyHeaders: false,
-    keyGenerator: (req) => `${req.ip}|${String(req.body?.email ?? '').trim().toLowerCase()}`,
+    keyGenerator: (req) => `${ipKeyGenerator(req.ip ?? '')}|${String(req.body?.email ?? '').trim().toLowerCase()}`,
     handler: (_req, _res, next) => next(rateLimited('Too many sign-in attempts. Wait 15 minutes, or reset your password.')),
   });
   const mailLimiter = rateLimit({
