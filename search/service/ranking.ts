@@ -6,7 +6,7 @@
  * words matched → typos → attribute rank → BM25.
  */
 import type { SearchIndex } from './index-store';
-import type { Bitset } from './structs';
+import type { Bitset, Posting } from './structs';
 import type { Expansion } from './query';
 import { words } from './normalize';
 
@@ -110,9 +110,18 @@ export function phraseSlots(ix: SearchIndex, cand: Bitset, ws: string[], searchM
   const lists = tids.map((t) => ix.postings[t!]).sort((a, b) => a.n - b.n);
   const out: { slot: number; attr: number }[] = [];
   const seq = ws.join(' ');
+  const inList = (pl: Posting, s: number) => {
+    let lo = 0, hi = pl.n;
+    while (lo < hi) { const m = (lo + hi) >>> 1; if (pl.docs[m] < s) lo = m + 1; else hi = m; }
+    return lo < pl.n && pl.docs[lo] === s && (pl.masks[lo] & searchMask) !== 0;
+  };
   for (let j = 0; j < lists[0].n; j++) {
     const s = lists[0].docs[j];
     if (!cand.has(s) || (lists[0].masks[j] & searchMask) === 0) continue;
+    // Postings are in slot order, so the other words are checked by binary search before reading text.
+    let all = true;
+    for (let k = 1; k < lists.length && all; k++) all = inList(lists[k], s);
+    if (!all) continue;
     const doc = ix.docs[s];
     if (!doc) continue;
     let best = -1;

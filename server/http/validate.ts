@@ -30,8 +30,18 @@ export function parseOrThrow<T extends ZodType>(schema: T, value: unknown, messa
  * Validates and replaces `req.body`, `req.query` and `req.params` with the parsed
  * (coerced, defaulted) values, so handlers only ever see valid input.
  */
-export function validate(schemas: { body?: ZodType; query?: ZodType; params?: ZodType }): RequestHandler {
-  return (req, _res, next) => {
+export interface ValidationSchemas {
+  body?: ZodType;
+  query?: ZodType;
+  params?: ZodType;
+}
+
+/** The schemas a `validate()` middleware checks, kept on it so the OpenAPI description reads them. */
+export const schemasOf = (handler: unknown): ValidationSchemas | undefined =>
+  (handler as { validationSchemas?: ValidationSchemas } | undefined)?.validationSchemas;
+
+export function validate(schemas: ValidationSchemas): RequestHandler {
+  const middleware: RequestHandler = (req, _res, next) => {
     if (schemas.params) req.params = parseOrThrow(schemas.params, req.params) as typeof req.params;
     if (schemas.query) {
       const query = parseOrThrow(schemas.query, req.query);
@@ -40,4 +50,5 @@ export function validate(schemas: { body?: ZodType; query?: ZodType; params?: Zo
     if (schemas.body) req.body = parseOrThrow(schemas.body, req.body ?? {});
     next();
   };
+  return Object.assign(middleware, { validationSchemas: schemas });
 }

@@ -4,6 +4,7 @@ import { authRouter } from './auth';
 import { usersRouter } from './users';
 import { reckonRouter } from './reckon';
 import { apiNotFound } from '../http/error-handler';
+import { buildOpenApi } from '../services/openapi';
 
 /**
  * The API under /api. Each resource has its own folder with a router factory;
@@ -15,6 +16,10 @@ export function apiRouter(): Router {
   router.use('/auth', authRouter());
   router.use('/users', usersRouter());
   router.use('/reckon', reckonRouter());
+  // Described from the router itself, after every resource is mounted.
+  router.get('/openapi.json', (_req, res) => {
+    res.json(buildOpenApi(router));
+  });
   router.use(apiNotFound);
   return router;
 }
