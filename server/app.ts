@@ -9,6 +9,7 @@ import { requireCsrfToken } from './http/csrf';
 import { errorHandler } from './http/error-handler';
 import { configurePassport } from './auth/passport';
 import { apiRouter } from './routes';
+import { oaiRouter } from './routes/open-standards/oai';
 
 const clientDir = resolve(import.meta.dirname, '../dist');
 
@@ -41,6 +42,9 @@ export function createApp(): Express {
   );
   app.use(express.json({ limit: '1mb' }));
   app.use(express.urlencoded({ extended: false, limit: '100kb' }));
+
+  // Harvesters POST read-only OAI-PMH queries without sessions, so it sits before sessions and CSRF.
+  app.use('/oai', oaiRouter());
 
   const sequelize = getSequelize();
   const passport = configurePassport();

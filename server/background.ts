@@ -3,9 +3,11 @@
  * worker, the facsimile text extractor). Each job is a starter returning its own
  * stop function; add a feature's job to this list.
  */
+import { startOutboxWorker } from '@search/outbox-worker';
+
 type Job = () => () => Promise<void>;
 
-const jobs: Job[] = [];
+const jobs: Job[] = [() => startOutboxWorker()];
 
 export function startBackgroundWork(): () => Promise<void> {
   const stops = jobs.map((job) => job());

@@ -108,8 +108,9 @@ export class Engine {
       ix.primaryKey = primaryKey;
       ix.applyDerived();
       this.indexes.set(uid, ix);
-      this.lastTask.set(uid, taskUid);
-      void this.store?.snapshot(ix, taskUid, false);
+      // The creating task's own op (if any) is logged after this, so the snapshot predates it.
+      this.lastTask.set(uid, taskUid - 1);
+      void this.store?.snapshot(ix, taskUid - 1, false);
     }
     return ix;
   }

@@ -55,7 +55,19 @@ async function main(): Promise<number> {
       env.PORT = '0';
       env.SEARCH_INDEX_PREFIX = 'e2e_';
       const { startWindway } = await import('../index');
-      const app = await startWindway();
+      const { getSequelize } = await import('../db');
+      const { migrateToLatest } = await import('../migrator');
+      const { seedDemo } = await import('../seeders/demo');
+      await migrateToLatest(getSequelize());
+      // The browser journeys run on the fictional demo world, with passwords made for this run.
+      const passwords = { reader: '', contributor: '', editor: '', admin: '' };
+      for (const role of Object.keys(passwords) as (keyof typeof passwords)[]) {
+        passwords[role] = `${role}-${randomBytes(9).toString('base64url')}`;
+        env[`E2E_PASSWORD_${role.toUpperCase()}`] = passwords[role];
+      }
+      env.DEMO = '1';
+      await seedDemo(passwords);
+      const app = await startWindway({ migrate: false });
       stops.unshift(() => app.close());
       env.E2E_BASE_URL = app.url;
       log(`App for end-to-end tests at ${app.url}`);

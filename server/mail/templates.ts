@@ -41,10 +41,12 @@ export const mailTemplates = {
     ], { label: 'Accept the invitation', url }),
   newSubmission: (contributor: string, title: string, url: string) =>
     compose(`New submission to review: ${title}`, [`${contributor} submitted “${title}” for review.`], { label: 'Open the review', url }),
-  decision: (name: string, title: string, decision: string, comment: string | null, url: string) =>
+  /** `notes`: the editor's comments on single fields, one line each ("Translation: …"). */
+  decision: (name: string, title: string, decision: string, comment: string | null, url: string, notes: string[] = []) =>
     compose(`Your submission “${title}” was ${decision}`, [
       `Dear ${name},`,
       `An editor ${decision} your submission “${title}”.`,
       ...(comment ? [`The editor wrote: ${comment}`] : []),
+      ...(notes.length ? ['Comments on single fields:', ...notes] : []),
     ], { label: 'See the submission', url }),
 };

@@ -130,7 +130,7 @@ export class PitchTag extends Model<InferAttributes<PitchTag>, InferCreationAttr
         excerptId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
         statement: { type: DataTypes.STRING(1000), allowNull: false },
         aHz: { type: DataTypes.DECIMAL(6, 2), allowNull: false },
-        centsFrom440: { type: DataTypes.DECIMAL(6, 1), allowNull: false },
+        centsFrom440: { type: DataTypes.DECIMAL(6, 1), allowNull: false, field: 'cents_from_440' },
         derivation: { type: DataTypes.ENUM(...pitchDerivations), allowNull: false },
         note: DataTypes.STRING(1000),
         position: { type: DataTypes.SMALLINT.UNSIGNED, allowNull: false, defaultValue: 0 },

@@ -9,8 +9,9 @@ import { Revision } from './revision';
 import { Review } from './review';
 import { SearchOutbox } from './search-outbox';
 import { InstrumentSizeRecord } from './instrument-size';
+import { Programme } from './programme';
 
-export { User, Session, PasswordReset, Source, Facsimile, Excerpt, InstrumentMention, PitchTag, Revision, Review, SearchOutbox, InstrumentSizeRecord };
+export { User, Session, PasswordReset, Source, Facsimile, Excerpt, InstrumentMention, PitchTag, Revision, Review, SearchOutbox, InstrumentSizeRecord, Programme };
 
 interface RegisteredModel {
   initModel(sequelize: Sequelize): void;
@@ -35,6 +36,7 @@ const registry: RegisteredModel[] = [
   Revision,
   Review,
   SearchOutbox,
+  Programme,
 ];
 
 export function initModels(sequelize: Sequelize): void {

@@ -3,6 +3,11 @@ import { healthRouter } from './health';
 import { authRouter } from './auth';
 import { usersRouter } from './users';
 import { reckonRouter } from './reckon';
+import { searchRouter } from './search';
+import { teiRouter } from './open-standards/tei';
+import { citeRouter } from './cite';
+import { programmesRouter, sharedProgrammesRouter } from './programmes';
+import { importRouter } from './import';
 import { apiNotFound } from '../http/error-handler';
 import { buildOpenApi } from '../services/openapi';
 
@@ -16,6 +21,12 @@ export function apiRouter(): Router {
   router.use('/auth', authRouter());
   router.use('/users', usersRouter());
   router.use('/reckon', reckonRouter());
+  router.use('/search', searchRouter());
+  router.use('/sources', teiRouter());
+  router.use(citeRouter());
+  router.use('/programmes', programmesRouter());
+  router.use('/shared-programmes', sharedProgrammesRouter());
+  router.use('/import', importRouter());
   // Described from the router itself, after every resource is mounted.
   router.get('/openapi.json', (_req, res) => {
     res.json(buildOpenApi(router));

@@ -101,9 +101,9 @@ export const createSourceSchema = sourceFieldsSchema;
  */
 function partialWithoutDefaults<T extends z.ZodRawShape>(shape: T) {
   const fields = Object.fromEntries(
-    Object.entries(shape).map(([key, field]) => [key, (field instanceof z.ZodDefault ? field.unwrap() : (field as z.ZodType)).optional()]),
+    Object.entries(shape).map(([key, field]) => [key, ((field instanceof z.ZodDefault ? field.unwrap() : field) as z.ZodType).optional()]),
   );
-  return z.object(fields as { [K in keyof T]: z.ZodOptional<T[K] extends z.ZodDefault<infer I> ? I : T[K]> });
+  return z.object(fields as unknown as { [K in keyof T]: z.ZodOptional<T[K] extends z.ZodDefault<infer I> ? I : T[K]> });
 }
 
 /** What every PATCH adds: the version it was based on, a reason, and (editors only) `publish` to keep approved material approved. */

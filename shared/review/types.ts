@@ -123,7 +123,10 @@ export interface ReviewDetail {
   /** The current content, as a snapshot. */
   item: Record<string, unknown>;
   facsimile: FacsimileInfo | null;
+  /** Since the last approved version (or everything, for a first submission). */
   diff: VersionDiff;
+  /** Since the version the last decision was about: what a resubmission fixed. Null before any decision. */
+  sinceLastReview: VersionDiff | null;
   reviews: ReviewRecord[];
   /** Excerpts of a source, with their state, so the editor can open each. */
   excerpts: { id: string; locator: string; status: WorkflowState; version: number }[];

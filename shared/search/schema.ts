@@ -26,17 +26,18 @@ export const facetNames = ['sizes', 'families', 'sourceType', 'languages', 'deca
 export type FacetName = (typeof facetNames)[number];
 
 /** `size=alto&size=tenor`, `size=alto,tenor` or a mix → `['alto', 'tenor']`. */
-function multi<T extends z.ZodType<string>>(item: T, max = 20) {
+function multi<O extends string>(item: z.ZodType<O, string>, max = 20) {
   return z
     .union([z.string(), z.array(z.string())])
     .optional()
     .transform((v) => (v === undefined ? [] : (Array.isArray(v) ? v : [v]).flatMap((s) => s.split(',')).map((s) => s.trim()).filter(Boolean)))
     .pipe(z.array(item).max(max, { error: `Choose at most ${max} values` }))
-    .transform((list) => [...new Set(list)] as z.output<T>[]);
+    .transform((list) => [...new Set(list)]);
 }
 
 /** One scalar query value; a repeated parameter is refused rather than guessed at. */
-const single = <T extends z.ZodType>(inner: T, name: string) =>
+// eslint-disable-next-line @typescript-eslint/no-explicit-any
+const single = <O>(inner: z.ZodType<O, any>, name: string) =>
   z.preprocess((v) => (v === '' ? undefined : v), z.string({ error: `Give ${name} once, as a single value` }).optional()).pipe(inner);
 
 const intIn = (name: string, min: number, max: number) =>

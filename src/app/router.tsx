@@ -66,7 +66,7 @@ export const routes: RouteObject[] = [
           },
           { path: 'excerpts/:id', lazy: placeholder('Excerpt') },
           { path: 'concordance', children: [{ index: true, lazy: placeholder('Concordance') }] },
-          { path: 'reckoner', children: [{ index: true, lazy: placeholder('Pitch & size reckoner') }] },
+          { path: 'reckoner', children: [{ index: true, lazy: () => import('@/features/reckoner/routes/reckoner') }] },
           {
             path: 'programmes',
             element: <RequireRole section="Programmes" />,

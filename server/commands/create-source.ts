@@ -1,0 +1,31 @@
+import type { SessionUser } from '../auth/passport';
+import { getSequelize } from '../db';
+import { Source } from '../models';
+import { newPublicId } from '../services/public-ids';
+import type { SourceFields } from '@shared/catalogue/schemas';
+import { dateColumns, recordSourceVersion } from './support';
+
+/** A new draft source at version 1, with its first revision and search outbox row, in one transaction. */
+export async function createSource(actor: SessionUser, input: SourceFields): Promise<Source> {
+  const date = dateColumns(input.dateEdtf);
+  return getSequelize().transaction(async (transaction) => {
+    const source = await Source.create(
+      {
+        ...input,
+        publicId: newPublicId('S'),
+        dateEdtf: date.dateEdtf!,
+        dateEarliest: date.dateEarliest!,
+        dateLatest: date.dateLatest!,
+        dateLabel: date.dateLabel!,
+        status: 'draft',
+        version: 1,
+        approvedVersion: null,
+        submittedAt: null,
+        contributorId: actor.id,
+      },
+      { transaction },
+    );
+    await recordSourceVersion(source, actor.id, 'Created', transaction);
+    return source;
+  });
+}

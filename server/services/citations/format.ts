@@ -1,0 +1,118 @@
+/** Citation exports: BibTeX, RIS, CSL-JSON, and text/HTML in a CSL style. */
+import type { CiteFormat, FormattedEntry } from '@shared/citations/api';
+import { archiveNote, type CiteItem, type CslItem } from '@shared/citations/csl';
+import { locatorLabels } from '@shared/catalogue/locator';
+import type { LocatorType } from '@shared/catalogue/vocabulary';
+import { exportWith, renderClusters } from './engine';
+import { useStyle } from './styles';
+
+export interface Citable {
+  item: CslItem;
+  cite: CiteItem;
+}
+
+export interface FormatResult {
+  data: string;
+  items: CslItem[];
+  entries?: FormattedEntry[];
+}
+
+export function formatCitations(citables: Citable[], format: CiteFormat, styleId: string): FormatResult {
+  const items = citables.map((c) => c.item);
+  switch (format) {
+    case 'csl-json':
+      return { data: `${JSON.stringify(items, null, 2)}\n`, items };
+    case 'bibtex':
+      return { data: toBibtex(citables), items };
+    case 'ris':
+      return { data: toRis(citables), items };
+    case 'text':
+    case 'html':
+      return formatStyled(citables, format, styleId);
+  }
+}
+
+function locatorText(item: CslItem): string | undefined {
+  const type = item.custom?.locatorType as LocatorType | undefined;
+  if (!item.locator || !type) return undefined;
+  const label = item.custom?.label;
+  return label === 'page' && (type === 'signature' || type === 'plate') ? item.locator : `${locatorLabels[type].abbreviation} ${item.locator}`;
+}
+
+/**
+ * What BibTeX and RIS get from an item. citation-js drops `archive` from both, so archive,
+ * shelfmark and locator go to `note` (BibTeX note / RIS N1). Patashnik's *BibTeXing* requires
+ * author, title and note for @unpublished, and author/editor, title, publisher and year for
+ * @book: an item without them is exported as a `document` (→ @misc, which requires nothing).
+ */
+function forExport(item: CslItem): CslItem {
+  const { custom: _custom, locator: _locator, 'title-short': _short, ...rest } = item;
+  const copy: CslItem = { ...rest };
+  const note = archiveNote(item, locatorText(item));
+  if (note) copy.note = note;
+  const hasAuthor = !!(item.author?.length || item.editor?.length);
+  if (copy.type === 'manuscript' && (!item.author?.length || !note)) copy.type = 'document';
+  if (copy.type === 'book' && (!hasAuthor || !item.publisher || !item.issued?.['date-parts'])) copy.type = 'document';
+  return copy;
+}
+
+export function toBibtex(citables: Citable[]): string {
+  return exportWith('bibtex', citables.map((c) => forExport(c.item))).trim() + '\n';
+}
+
+/**
+ * RIS (RIS Format Specifications, 2011): citation-js writes `TY` first and `ER` last, MANSCPT for a
+ * manuscript, BOOK, GEN; we add `AV` (location in archives: the shelfmark), which it reads back
+ * as `archive_location` but does not write.
+ */
+export function toRis(citables: Citable[]): string {
+  const records = exportWith('ris', citables.map((c) => forExport(c.item)))
+    .split(/\r?\nER {2}-\s*/)
+    .map((r) => r.trim())
+    .filter(Boolean);
+  return records
+    .map((record, i) => {
+      const lines = record.split(/\r?\n/);
+      const shelfmark = citables[i]?.item.archive_location;
+      if (shelfmark && !lines.some((l) => l.startsWith('AV  - '))) lines.push(`AV  - ${shelfmark}`);
+      return [...lines, 'ER  - '].join('\r\n');
+    })
+    .join('\r\n\r\n') + '\r\n';
+}
+
+/**
+ * Text/HTML. Note style: each item's first (full) footnote with its locator, a later short note,
+ * and the bibliography; in-text style: the citation and the reference list. Each item is cited
+ * twice in one processor run (notes 4i+1 and 4i+3, so the second is "subsequent", not an
+ * immediate repeat).
+ */
+function formatStyled(citables: Citable[], format: 'text' | 'html', styleId: string): FormatResult {
+  const style = useStyle(styleId);
+  const items = citables.map((c) => c.item);
+  const clusters = citables.flatMap((c, i) => [
+    { items: [c.cite], noteIndex: 4 * i + 1 },
+    { items: [c.cite], noteIndex: 4 * i + 3 },
+  ]);
+  const { texts, bibliography } = renderClusters(items, clusters, styleId, format);
+  const bibById = new Map(bibliography.map((b) => [b.id, b.text]));
+  const entries: FormattedEntry[] = citables.map((c, i) => {
+    const first = texts[2 * i];
+    const bib = bibById.get(c.item.id) ?? '';
+    return style.kind === 'note'
+      ? { id: c.item.id, note: first, shortNote: texts[2 * i + 1], bibliography: bib }
+      : { id: c.item.id, citation: first, bibliography: bib };
+  });
+  const noteLabel = style.kind === 'note' ? 'Notes' : 'Citations';
+  const bibLabel = style.kind === 'note' ? 'Bibliography' : 'References';
+  const lead = entries.map((e) => (style.kind === 'note' ? e.note! : e.citation!));
+  if (format === 'text') {
+    const numbered = lead.map((t, i) => (style.kind === 'note' ? `${i + 1}. ${t}` : t));
+    const data = `${noteLabel}\n${numbered.join('\n')}\n\n${bibLabel}\n${bibliography.map((b) => b.text).join('\n')}\n`;
+    return { data, items, entries };
+  }
+  const list = lead.map((t) => `<li>${t}</li>`).join('');
+  const data =
+    `<section class="csl-${style.kind === 'note' ? 'notes' : 'citations'}"><h2>${noteLabel}</h2><${style.kind === 'note' ? 'ol' : 'ul'}>${list}</${style.kind === 'note' ? 'ol' : 'ul'}></section>\n` +
+    `<section class="csl-bibliography"><h2>${bibLabel}</h2><div class="csl-bib-body">${bibliography.map((b) => `<div class="csl-entry">${b.text}</div>`).join('')}</div></section>\n`;
+  return { data, items, entries };
+}

@@ -1,0 +1,192 @@
+import { useEffect, useRef, useState } from 'react';
+import { FormProvider, useForm, useWatch, type Path } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useQueryClient } from '@tanstack/react-query';
+import { createSourceSchema, type SourceFields } from '@shared/catalogue/schemas';
+import type { SourceDetail } from '@shared/catalogue/types';
+import { Button } from '@/components/button';
+import { TextField } from '@/components/text-field';
+import { ConflictNotice } from '@/features/contribute/components/conflict-notice';
+import { DraftPrompt } from '@/features/contribute/components/draft-prompt';
+import { ErrorSummary } from '@/features/contribute/components/error-summary';
+import { SaveBar } from '@/features/contribute/components/save-bar';
+import { flattenErrors } from '@/features/contribute/lib/flatten-errors';
+import { mergeChanges } from '@/features/contribute/lib/merge-changes';
+import { useFormDraft } from '@/features/contribute/lib/use-form-draft';
+import { errorMessage, isApiError } from '@/lib/api';
+import { useCreateSource } from '../../api/create-source';
+import { getSourceQueryOptions } from '../../api/get-source';
+import { useUpdateSource } from '../../api/update-source';
+import { DateFields } from './date-fields';
+import { HoldingFields } from './holding-fields';
+import { IdentificationFields } from './identification-fields';
+import { PlaceLanguageFields } from './place-language-fields';
+import { PublicationFields } from './publication-fields';
+import { RightsFields } from './rights-fields';
+import {
+  emptySourceValues,
+  isPrinted,
+  sourceFieldLabels,
+  sourceFormId,
+  sourceToFormValues,
+  toSourcePayload,
+  type SourceFormValues,
+} from './values';
+
+export interface SourceFormProps {
+  /** The saved source when editing; a new source otherwise. */
+  source?: SourceDetail;
+  onSaved: (source: SourceDetail) => void;
+  onCancel?: () => void;
+}
+
+interface ConflictState {
+  reappliedVersion: number | null;
+  overlapping: string[];
+}
+
+/** Catalogue a source, or edit one: shared schema, inline messages, a draft kept in the browser, safe on conflicts. */
+export function SourceForm({ source, onSaved, onCancel }: SourceFormProps) {
+  const queryClient = useQueryClient();
+  const form = useForm<SourceFormValues, unknown, SourceFields>({
+    resolver: zodResolver(createSourceSchema),
+    defaultValues: source ? sourceToFormValues(source) : emptySourceValues(),
+  });
+  const [version, setVersion] = useState<number | null>(source?.version ?? null);
+  const base = useRef<SourceFormValues | null>(source ? sourceToFormValues(source) : null);
+  const draft = useFormDraft(form, source ? `source:${source.id}` : 'source:new', { baseVersion: version });
+  const create = useCreateSource();
+  const update = useUpdateSource();
+  const [reason, setReason] = useState('');
+  const [attempt, setAttempt] = useState(0);
+  const [serverError, setServerError] = useState<unknown>(null);
+  const [conflict, setConflict] = useState<ConflictState | null>(null);
+  const [reapplying, setReapplying] = useState(false);
+  const conflictRef = useRef<HTMLDivElement>(null);
+  const sourceType = useWatch({ control: form.control, name: 'sourceType' });
+
+  useEffect(() => {
+    if (conflict && conflict.reappliedVersion === null) conflictRef.current?.focus();
+  }, [conflict]);
+
+  const onError = (error: unknown) => {
+    if (isApiError(error) && error.code === 'conflict') {
+      setConflict({ reappliedVersion: null, overlapping: [] });
+      return;
+    }
+    if (isApiError(error) && error.fields) {
+      for (const [path, message] of Object.entries(error.fields)) {
+        form.setError(path as Path<SourceFormValues>, { type: 'server', message });
+      }
+    }
+    setServerError(error);
+    setAttempt((n) => n + 1);
+  };
+
+  const onValid = (values: SourceFields) => {
+    setServerError(null);
+    const payload = toSourcePayload(values);
+    const done = {
+      onSuccess: (result: { data: SourceDetail }) => {
+        draft.clear();
+        setConflict(null);
+        onSaved(result.data);
+      },
+      onError,
+    };
+    if (source && version !== null) {
+      update.mutate({ id: source.id, version, changes: payload, reason: reason.trim() || undefined }, done);
+    } else {
+      create.mutate(payload, done);
+    }
+  };
+
+  const reapply = async () => {
+    if (!source || !base.current) return;
+    setReapplying(true);
+    try {
+      const latest = await queryClient.fetchQuery({ ...getSourceQueryOptions(source.id), staleTime: 0 });
+      const latestValues = sourceToFormValues(latest.data);
+      const merged = mergeChanges(base.current, form.getValues(), latestValues);
+      base.current = latestValues;
+      setVersion(latest.data.version);
+      form.reset(merged.values, { keepDefaultValues: true });
+      setConflict({ reappliedVersion: latest.data.version, overlapping: merged.overlapping.map((k) => sourceFieldLabels[k] ?? k) });
+    } catch (error) {
+      setServerError(error);
+      setAttempt((n) => n + 1);
+    } finally {
+      setReapplying(false);
+    }
+  };
+
+  const errors = flattenErrors(form.formState.errors);
+  const serverMessage = serverError && !(isApiError(serverError) && serverError.fields && errors.length) ? errorMessage(serverError) : undefined;
+  const saving = create.isPending || update.isPending;
+
+  return (
+    <FormProvider {...form}>
+      <form
+        id={sourceFormId}
+        noValidate
+        aria-label={source ? `Edit ${source.title}` : 'New source'}
+        onSubmit={form.handleSubmit(onValid, () => {
+          setServerError(null);
+          setAttempt((n) => n + 1);
+        })}
+        className="space-y-6"
+      >
+        {draft.pending && (
+          <DraftPrompt draft={draft.pending} currentVersion={version} onRestore={draft.restore} onDiscard={draft.discard} />
+        )}
+        {conflict && (
+          <div ref={conflictRef} tabIndex={-1} className="outline-none">
+            <ConflictNotice
+              noun="source"
+              onReapply={() => void reapply()}
+              reapplying={reapplying}
+              reappliedVersion={conflict.reappliedVersion}
+              overlapping={conflict.overlapping}
+            />
+          </div>
+        )}
+        <ErrorSummary
+          attempt={attempt}
+          errors={errors}
+          form={sourceFormId}
+          labels={sourceFieldLabels}
+          message={serverMessage}
+          title={serverError ? 'The source was not saved' : 'Please check these fields'}
+        />
+
+        <IdentificationFields />
+        <DateFields />
+        <PlaceLanguageFields />
+        <HoldingFields />
+        {isPrinted(sourceType) && <PublicationFields />}
+        <RightsFields />
+
+        {source && (
+          <TextField
+            label="What changed, for the revision history"
+            labelSuffix="(optional)"
+            value={reason}
+            onChange={(event) => setReason(event.target.value)}
+            maxLength={500}
+          />
+        )}
+
+        <SaveBar savedAt={draft.savedAt}>
+          <Button type="submit" loading={saving}>
+            {source ? 'Save changes' : 'Save as draft'}
+          </Button>
+          {onCancel && (
+            <Button variant="secondary" onClick={onCancel}>
+              Cancel
+            </Button>
+          )}
+        </SaveBar>
+      </form>
+    </FormProvider>
+  );
+}
