@@ -12,7 +12,8 @@ export function getSequelize(): Sequelize {
     dialect: 'mariadb',
     logging: false,
     define: { underscored: true },
-    dialectOptions: { timezone: 'Etc/GMT0', connectTimeout: 5000 },
+    timezone: '+00:00',
+    dialectOptions: { connectTimeout: 5000 },
     pool: { max: 10, min: 0, acquire: 10_000, idle: 10_000 },
     retry: { max: 0 },
   });
