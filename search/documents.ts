@@ -10,9 +10,10 @@
  * contributor) and editors. One document per excerpt keeps hits and facet counts
  * equal to counts of excerpts. The same rule applies to the source's fields.
  */
-import { Op, type Transaction } from 'sequelize';
+import { Op, QueryTypes, type Transaction } from 'sequelize';
 import { marked, type Token } from 'marked';
-import { Excerpt, InstrumentMention, PitchTag, Revision, Source } from '@server/models';
+import { getSequelize } from '@server/db';
+import { Revision } from '@server/models';
 import { INSTRUMENT_SIZES } from '@shared/reckoner/sizes';
 import { formatLocator } from '@shared/catalogue/locator';
 import type { LocatorType, SourceType } from '@shared/catalogue/vocabulary';
@@ -95,16 +96,28 @@ type Snapshot = Record<string, unknown>;
 type MentionLike = { term: string; sizeSlug: string };
 type PitchLike = { aHz: number | string };
 
+/** An excerpt row as the builder reads it (plain data: the re-index loads 100,000 of these). */
+export interface ExcerptRecord {
+  id: number; publicId: string; sourceId: number; status: string; approvedVersion: number | null; contributorId: number;
+  locatorType: string; locatorValue: string; diplomatic: string; normalised: string | null; translation: string | null;
+  commentary: string | null; dateEarliest: string | null; dateLatest: string | null; dateLabel: string | null;
+  mentions: MentionLike[]; pitchTags: PitchLike[];
+}
+export interface SourceRecord {
+  id: number; publicId: string; status: string; approvedVersion: number | null; contributorId: number; title: string;
+  sourceType: string; creators: unknown; place: string | null; languages: unknown; dateEarliest: string; dateLatest: string; dateLabel: string;
+}
+
 interface Loaded {
-  excerpt: Excerpt;
-  source: Source;
+  excerpt: ExcerptRecord;
+  source: SourceRecord;
   excerptSnapshot: Snapshot | null;
   sourceSnapshot: Snapshot | null;
 }
 
 /** The public version of an excerpt/source as a plain record, or null when it must stay a draft. */
-function publicView(current: Excerpt | Source, snapshot: Snapshot | null): Snapshot | null {
-  if (current.status === 'approved') return current.get({ plain: true }) as Snapshot;
+function publicView(current: ExcerptRecord | SourceRecord, snapshot: Snapshot | null): Snapshot | null {
+  if (current.status === 'approved') return current as unknown as Snapshot;
   if (current.approvedVersion === null) return null;
   return snapshot;
 }
@@ -114,8 +127,8 @@ export function buildDocument({ excerpt, source, excerptSnapshot, sourceSnapshot
   const e = (isPublic ? publicView(excerpt, excerptSnapshot) : null) ?? null;
   const s = (isPublic ? publicView(source, sourceSnapshot) : null) ?? null;
   const visible = isPublic && e !== null && s !== null;
-  const ex = visible ? e : (excerpt.get({ plain: true }) as Snapshot);
-  const so = visible ? s : (source.get({ plain: true }) as Snapshot);
+  const ex = visible ? e : (excerpt as unknown as Snapshot);
+  const so = visible ? s : (source as unknown as Snapshot);
 
   const mentions = ((visible && Array.isArray(ex.mentions) ? ex.mentions : excerpt.mentions) ?? []) as MentionLike[];
   const pitchTags = ((visible && Array.isArray(ex.pitchTags) ? ex.pitchTags : excerpt.pitchTags) ?? []) as PitchLike[];
@@ -128,7 +141,7 @@ export function buildDocument({ excerpt, source, excerptSnapshot, sourceSnapshot
   const dateLabel = (ownEarliest ? str(ex, 'dateLabel') : null) ?? str(so, 'dateLabel') ?? '';
   const yearEarliest = yearOf(earliest);
   const yearLatest = yearOf(latest);
-  const creators = Array.isArray(so.creators) ? (so.creators as { name: string }[]).map((c) => c.name) : [];
+  const creators = Array.isArray(json(so.creators)) ? (json(so.creators) as { name: string }[]).map((c) => c.name) : [];
   const ownerIds = [...new Set([excerpt.contributorId, source.contributorId])];
 
   return {
@@ -141,7 +154,7 @@ export function buildDocument({ excerpt, source, excerptSnapshot, sourceSnapshot
     sourceType: (str(so, 'sourceType') ?? source.sourceType) as SourceType,
     creators,
     place: clean(str(so, 'place')),
-    languages: Array.isArray(so.languages) ? (so.languages as string[]) : [],
+    languages: Array.isArray(json(so.languages)) ? (json(so.languages) as string[]) : [],
     locator: formatLocator((str(ex, 'locatorType') ?? excerpt.locatorType) as LocatorType, str(ex, 'locatorValue') ?? excerpt.locatorValue),
     diplomatic: clean(str(ex, 'diplomatic')) ?? '',
     normalised: clean(str(ex, 'normalised')),
@@ -163,8 +176,11 @@ export function buildDocument({ excerpt, source, excerptSnapshot, sourceSnapshot
   };
 }
 
+/** JSON columns come back from raw queries as text. */
+const json = (v: unknown): unknown => (typeof v === 'string' ? JSON.parse(v) : v);
+
 /** Latest snapshots of the given entities at their approved versions, keyed by entity id. */
-async function approvedSnapshots(entityType: 'source' | 'excerpt', records: (Excerpt | Source)[], transaction?: Transaction) {
+async function approvedSnapshots(entityType: 'source' | 'excerpt', records: (ExcerptRecord | SourceRecord)[], transaction?: Transaction) {
   const wanted = records.filter((r) => r.status !== 'approved' && r.approvedVersion !== null);
   const map = new Map<number, Snapshot>();
   if (!wanted.length) return map;
@@ -173,29 +189,42 @@ async function approvedSnapshots(entityType: 'source' | 'excerpt', records: (Exc
     attributes: ['entityId', 'snapshot'],
     transaction,
   });
-  for (const row of rows) map.set(row.entityId, typeof row.snapshot === 'string' ? JSON.parse(row.snapshot) : row.snapshot);
+  for (const row of rows) map.set(row.entityId, json(row.snapshot) as Snapshot);
   return map;
 }
 
+const EXCERPT_COLUMNS = `id, public_id AS publicId, source_id AS sourceId, status, approved_version AS approvedVersion,
+  contributor_id AS contributorId, locator_type AS locatorType, locator_value AS locatorValue, diplomatic, normalised,
+  translation, commentary, date_earliest AS dateEarliest, date_latest AS dateLatest, date_label AS dateLabel`;
+const SOURCE_COLUMNS = `id, public_id AS publicId, status, approved_version AS approvedVersion, contributor_id AS contributorId,
+  title, source_type AS sourceType, creators, place, languages, date_earliest AS dateEarliest, date_latest AS dateLatest, date_label AS dateLabel`;
+
 /**
- * Builds documents for excerpts by row id. Ids without an excerpt (deleted) come back
- * in `missing`, so the caller deletes their documents.
+ * Builds documents for excerpts by row id, with four plain queries per batch (no
+ * model instances: the re-index builds 100,000). Ids without an excerpt (deleted)
+ * come back in `missing`, so the caller deletes their documents.
  */
 export async function buildDocuments(excerptIds: number[], transaction?: Transaction): Promise<{ docs: ExcerptDocument[]; missing: number[] }> {
   if (!excerptIds.length) return { docs: [], missing: [] };
-  const excerpts = await Excerpt.findAll({
-    where: { id: excerptIds },
-    include: [
-      { model: InstrumentMention, as: 'mentions' },
-      { model: PitchTag, as: 'pitchTags' },
-    ],
-    transaction,
-  });
+  const sequelize = getSequelize();
+  const select = <T extends object>(sql: string, ids: number[]) =>
+    sequelize.query<T>(sql, { replacements: [ids], type: QueryTypes.SELECT, transaction });
+  const excerpts = await select<ExcerptRecord>(`SELECT ${EXCERPT_COLUMNS} FROM excerpts WHERE id IN (?)`, excerptIds);
+  if (!excerpts.length) return { docs: [], missing: [...excerptIds] };
+  const ids = excerpts.map((e) => e.id);
   const sourceIds = [...new Set(excerpts.map((e) => e.sourceId))];
-  const sources = new Map((await Source.findAll({ where: { id: sourceIds }, transaction })).map((s) => [s.id, s]));
+  const [mentions, pitchTags, sourceRows] = await Promise.all([
+    select<MentionLike & { excerptId: number }>('SELECT excerpt_id AS excerptId, term, size_slug AS sizeSlug FROM instrument_mentions WHERE excerpt_id IN (?) ORDER BY excerpt_id, position', ids),
+    select<PitchLike & { excerptId: number }>('SELECT excerpt_id AS excerptId, a_hz AS aHz FROM pitch_tags WHERE excerpt_id IN (?) ORDER BY excerpt_id, position', ids),
+    select<SourceRecord>(`SELECT ${SOURCE_COLUMNS} FROM sources WHERE id IN (?)`, sourceIds),
+  ]);
+  const byExcerpt = new Map(excerpts.map((e) => [e.id, Object.assign(e, { mentions: [] as MentionLike[], pitchTags: [] as PitchLike[] })]));
+  for (const m of mentions) byExcerpt.get(m.excerptId)?.mentions.push(m);
+  for (const p of pitchTags) byExcerpt.get(p.excerptId)?.pitchTags.push(p);
+  const sources = new Map(sourceRows.map((s) => [s.id, s]));
   const [excerptSnaps, sourceSnaps] = await Promise.all([
     approvedSnapshots('excerpt', excerpts, transaction),
-    approvedSnapshots('source', [...sources.values()], transaction),
+    approvedSnapshots('source', sourceRows, transaction),
   ]);
   const docs: ExcerptDocument[] = [];
   const found = new Set<number>();

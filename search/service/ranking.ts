@@ -8,7 +8,7 @@
 import type { SearchIndex } from './index-store';
 import type { Bitset, Posting } from './structs';
 import type { Expansion } from './query';
-import { words } from './normalize';
+import { fold } from './normalize';
 
 const K1 = 1.2;
 const B = 0.75;
@@ -109,7 +109,10 @@ export function phraseSlots(ix: SearchIndex, cand: Bitset, ws: string[], searchM
   if (tids.some((t) => t === undefined)) return [];
   const lists = tids.map((t) => ix.postings[t!]).sort((a, b) => a.n - b.n);
   const out: { slot: number; attr: number }[] = [];
-  const seq = ws.join(' ');
+  // One regex over the folded text instead of tokenizing each candidate: words adjacent, separated by non-word characters.
+  const W = '[\\p{L}\\p{N}\\p{M}]';
+  const esc = ws.map((w) => w.replace(/[.*+?^${}()|[\]\\]/g, '\\$&'));
+  const re = new RegExp(`(?:^|(?<!${W}))${esc.join(`(?!${W})(?:[^\\p{L}\\p{N}\\p{M}]+)`)}(?!${W})`, 'u');
   const inList = (pl: Posting, s: number) => {
     let lo = 0, hi = pl.n;
     while (lo < hi) { const m = (lo + hi) >>> 1; if (pl.docs[m] < s) lo = m + 1; else hi = m; }
@@ -127,7 +130,7 @@ export function phraseSlots(ix: SearchIndex, cand: Bitset, ws: string[], searchM
     let best = -1;
     for (const [rank, texts] of ix.fieldTexts(doc)) {
       if (((1 << Math.min(rank, 15)) & searchMask) === 0) continue;
-      if (texts.some((t) => (' ' + words(t).join(' ') + ' ').includes(' ' + seq + ' '))) { best = rank; break; }
+      if (texts.some((t) => re.test(fold(t)))) { best = rank; break; }
     }
     if (best >= 0) out.push({ slot: s, attr: Math.min(best, 15) });
   }

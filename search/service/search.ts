@@ -108,6 +108,21 @@ export function runSearch(ix: SearchIndex, p: SearchParams, indexUid = ix.uid): 
       }
       counts.push(S.commitUnit(1 << i));
     });
+    // Multi-word synonym keys ("flute a bec" → recorder): an alternative's match counts for every word it stands for.
+    for (let len = 2; len <= 4; len++) {
+      for (let i = 0; i + len <= n; i++) {
+        const span = pos.slice(i, i + len);
+        if (span.some((u) => u.kind !== 'word')) continue;
+        const alts = ix.synonyms.get(span.map((u) => u.words[0]).join(' '));
+        if (!alts?.length) continue;
+        for (const alt of alts) {
+          if (alt.length === 1) { const tid = ix.vocab.get(alt[0]); if (tid !== undefined) matchWord(ix, cand, [{ tid, typos: 0, prefix: false }], searchMask, typoMask); }
+          else matchPhrase(ix, cand, alt, searchMask);
+          highlight.push(...alt);
+        }
+        S.commitUnit(((1 << len) - 1) << i);
+      }
+    }
     // Required unit sets per "words" level, per matching strategy.
     const req: number[] = new Array(n + 1).fill(-1);
     if (p.matchingStrategy === 'all') req[n] = (1 << n) - 1;

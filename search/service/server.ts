@@ -29,7 +29,9 @@ export interface SearchService {
 export async function startSearchService({ host = '127.0.0.1', port = 0, masterKey, dataDir }: SearchServiceOptions = {}): Promise<SearchService> {
   const engine = new Engine(dataDir ? new Store(dataDir) : null);
   const server = http.createServer(makeHandler(engine, masterKey));
-  server.keepAliveTimeout = 5_000;
+  // Longer than clients' own keep-alive (undici: 4 s), so the client always closes idle sockets first and never races a server-side close.
+  server.keepAliveTimeout = 65_000;
+  server.headersTimeout = 66_000;
   await new Promise<void>((resolve, reject) => {
     server.once('error', reject);
     server.listen(port, host, () => { server.off('error', reject); resolve(); });

@@ -8,6 +8,7 @@ import { ownWorkMessage, reviewPolicy } from '../policies/review';
 import type { SessionUser } from '../auth/passport';
 import { decisionNeedsComment, stateLabels, transition } from '@shared/catalogue/workflow';
 import { isContentField } from '@shared/review/fields';
+import type { WorkflowState } from '@shared/catalogue/vocabulary';
 import type { Decision } from '@shared/review/schemas';
 import type { EntityKind } from '@shared/review/types';
 
@@ -43,7 +44,7 @@ export async function writeNextVersion(
 ): Promise<number> {
   const { item } = target;
   const version = item.version + 1;
-  item.set({ ...changes, version } as never);
+  (item as Source).set({ ...changes, version } as Partial<Source>);
   await item.save({ transaction });
   const why = reason?.slice(0, 500) ?? null;
   if (target.kind === 'source') await recordSourceVersion(target.item, authorId, why, transaction);
@@ -87,7 +88,7 @@ export async function decideReview(actor: SessionUser, input: Decision): Promise
     if (!reviewPolicy.decideOn(actor, item, kind === 'excerpt' ? source : undefined)) throw forbidden(ownWorkMessage(kind));
     const next = transition(item.status, input.decision);
     if (!next) {
-      throw conflict(`Cannot ${input.decision} this ${kind}: it is “${stateLabels[item.status]}” (${item.status}), and only a submission awaiting review can be decided.`);
+      throw conflict(`Cannot ${input.decision} this ${kind}: it is “${stateLabels[item.status as WorkflowState]}” (${item.status}), and only a submission awaiting review can be decided.`);
     }
     if (item.version !== version) {
       throw conflict(`This ${kind} changed since you opened it: you reviewed version ${version}, the current one is ${item.version}. Reload and review the current version.`);

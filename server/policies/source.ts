@@ -5,8 +5,8 @@ import { atLeast, type Actor } from './index';
 
 type SourceLike = Pick<Source, 'contributorId' | 'status' | 'approvedVersion'>;
 
-const isOwner = (actor: Actor, source: SourceLike) => atLeast(actor, 'contributor') && actor.id === source.contributorId;
-const isEditor = (actor: Actor) => atLeast(actor, 'editor');
+const isOwner = (actor: Actor, source: SourceLike): boolean => atLeast(actor, 'contributor') && actor.id === source.contributorId;
+const isEditor = (actor: Actor): boolean => atLeast(actor, 'editor');
 
 /** Public material: approved now, or approved before and now carrying a newer version under review. */
 export const isPublished = (record: { status: string; approvedVersion: number | null }) =>
@@ -17,17 +17,17 @@ export const isPublished = (record: { status: string; approvedVersion: number | 
  * (`canEditState`) so a route can answer 409 "it is awaiting review" instead of 403.
  */
 export const sourcePolicy = {
-  create: (actor: Actor) => atLeast(actor, 'contributor'),
+  create: (actor: Actor): boolean => atLeast(actor, 'contributor'),
   /** Sees the current version, drafts included. */
-  readCurrent: (actor: Actor, source: SourceLike) => isOwner(actor, source) || isEditor(actor),
-  read: (actor: Actor, source: SourceLike) => isPublished(source) || sourcePolicy.readCurrent(actor, source),
-  update: (actor: Actor, source: SourceLike) => isOwner(actor, source) || isEditor(actor),
+  readCurrent: (actor: Actor, source: SourceLike): boolean => isOwner(actor, source) || isEditor(actor),
+  read: (actor: Actor, source: SourceLike): boolean => isPublished(source) || sourcePolicy.readCurrent(actor, source),
+  update: (actor: Actor, source: SourceLike): boolean => isOwner(actor, source) || isEditor(actor),
   /** Saving approved material and keeping it approved skips review: editors only. */
-  publish: (actor: Actor) => isEditor(actor),
-  step: (actor: Actor, source: SourceLike) => isOwner(actor, source) || isEditor(actor),
-  review: (actor: Actor) => isEditor(actor),
+  publish: (actor: Actor): boolean => isEditor(actor),
+  step: (actor: Actor, source: SourceLike): boolean => isOwner(actor, source) || isEditor(actor),
+  review: (actor: Actor): boolean => isEditor(actor),
   /** Lists: editors see everything; contributors their own too. */
-  seesAll: (actor: Actor) => isEditor(actor),
+  seesAll: (actor: Actor): boolean => isEditor(actor),
 };
 
 export function sourceAbilities(actor: Actor, source: SourceLike): SourceAbilities {

@@ -1,6 +1,7 @@
 import type { Excerpt, Review, Source, User } from '../models';
 import type { MySubmission, QueueRow, ReviewRecord } from '@shared/review/types';
 import { formatLocator } from '@shared/catalogue/locator';
+import type { WorkflowState } from '@shared/catalogue/vocabulary';
 import { stateLabels } from '@shared/catalogue/workflow';
 import { presentCredit } from './user';
 
@@ -76,7 +77,7 @@ export function presentSubmission(
     title: kind === 'source' ? source.title : excerptTitle(item as Excerpt, source),
     source: { id: source.publicId, title: source.title },
     status: item.status,
-    statusLabel: stateLabels[item.status],
+    statusLabel: stateLabels[item.status as WorkflowState],
     version: item.version,
     updatedAt: item.updatedAt.toISOString(),
     lastReview: lastReview ? presentReview(lastReview) : null,

@@ -4,10 +4,12 @@ import { authRouter } from './auth';
 import { usersRouter } from './users';
 import { reckonRouter } from './reckon';
 import { searchRouter } from './search';
+import { insightsRouter } from './insights';
 import { teiRouter } from './open-standards/tei';
 import { citeRouter } from './cite';
 import { programmesRouter, sharedProgrammesRouter } from './programmes';
 import { importRouter } from './import';
+import { workflowRouter } from './reviews/workflow';
 import { apiNotFound } from '../http/error-handler';
 import { buildOpenApi } from '../services/openapi';
 
@@ -22,11 +24,13 @@ export function apiRouter(): Router {
   router.use('/users', usersRouter());
   router.use('/reckon', reckonRouter());
   router.use('/search', searchRouter());
+  router.use('/insights', insightsRouter());
   router.use('/sources', teiRouter());
   router.use(citeRouter());
   router.use('/programmes', programmesRouter());
   router.use('/shared-programmes', sharedProgrammesRouter());
   router.use('/import', importRouter());
+  router.use(workflowRouter());
   // Described from the router itself, after every resource is mounted.
   router.get('/openapi.json', (_req, res) => {
     res.json(buildOpenApi(router));

@@ -43,7 +43,7 @@ async function approvedSnapshots(entityType: EntityType, rows: { id: number; app
   const wanted = rows.filter((r) => r.approvedVersion !== null);
   if (wanted.length === 0) return new Map<number, Record<string, unknown>>();
   const revisions = await Revision.findAll({
-    where: { entityType, [Op.or]: wanted.map((r) => ({ entityId: r.id, version: r.approvedVersion })) },
+    where: { entityType, [Op.or]: wanted.map((r) => ({ entityId: r.id, version: r.approvedVersion! })) },
   });
   return new Map(revisions.map((r) => [r.entityId, r.snapshot]));
 }

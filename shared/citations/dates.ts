@@ -47,9 +47,10 @@ export function edtfToCslDate(edtf: string | null | undefined): CslDate | undefi
     const season = code >= 21 && code <= 24 ? code - 20 : undefined;
     return season ? { 'date-parts': [[year]], season } : { 'date-parts': [[year]] };
   }
-  const [first, last] = pointRange(tree);
+  const point = tree as PointNode;
+  const [first, last] = pointRange(point);
   const parts = samePart(first, last) ? { 'date-parts': [first] } : { 'date-parts': [first, last] };
-  return withCirca(parts, qualified(tree));
+  return withCirca(parts, qualified(point));
 }
 
 function withCirca(date: CslDate, circa: boolean): CslDate {

@@ -1,4 +1,5 @@
 import type { Certainty, ReviewDecision, SourceType, WorkflowState } from '../catalogue/vocabulary';
+import type { FacsimileView } from '../catalogue/types';
 
 /** What a review, a revision or a permalink is about. */
 export const entityKinds = ['source', 'excerpt'] as const;
@@ -100,14 +101,10 @@ export interface VersionSnapshot {
   snapshot: Record<string, unknown>;
 }
 
+/** The source's facsimile and the page of this excerpt in it (1-based), when recorded. */
 export interface FacsimileInfo {
-  id: number;
-  originalName: string;
-  mediaType: string;
-  pageCount: number | null;
-  /** The page of this excerpt in the facsimile (1-based), when recorded. */
+  view: FacsimileView;
   page: number | null;
-  access: string;
 }
 
 export interface ReviewDetail {

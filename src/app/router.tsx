@@ -56,7 +56,7 @@ export const routes: RouteObject[] = [
           // ======== SECTIONS BUILT BY OTHER ENGINEERS — swap `placeholder(...)` for your route module ========
           // e.g. { index: true, lazy: () => import('@/features/search/routes/search') }
           // Add sub-pages (e.g. { path: ':id/edit', lazy: ... }) next to the index route. Keep the guards.
-          { path: 'search', children: [{ index: true, lazy: placeholder('Search') }] },
+          { path: 'search', children: [{ index: true, lazy: () => import('@/features/search/routes/search') }] },
           {
             path: 'sources',
             children: [

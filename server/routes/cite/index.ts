@@ -34,8 +34,8 @@ function send(req: Request, res: Response, citables: Citable[], format: CiteForm
     res.json(body);
     return;
   }
-  res.type(contentTypes[format]);
   if (download) res.attachment(`windway-${name}.${fileExtensions[format]}`);
+  res.type(contentTypes[format]);
   res.send(result.data);
 }
 

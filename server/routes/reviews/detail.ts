@@ -6,9 +6,11 @@ import { revisionAt } from '../../services/revisions';
 import { ownWorkMessage, reviewPolicy } from '../../policies/review';
 import type { Actor } from '../../policies';
 import { formatLocator } from '@shared/catalogue/locator';
+import type { WorkflowState } from '@shared/catalogue/vocabulary';
 import { stateLabels } from '@shared/catalogue/workflow';
 import type { EntityKind, FacsimileInfo, ReviewDetail, VersionDiff } from '@shared/review/types';
 import { presentCredit } from '../../presenters/user';
+import { presentFacsimile } from '../../presenters/facsimile';
 import { ownerScope, type LoadedTarget } from './targets';
 
 export const currentSnapshot = (target: LoadedTarget) =>
@@ -22,22 +24,15 @@ export async function diffFromVersion(target: LoadedTarget, from: number | null)
 }
 
 async function facsimileOf(target: LoadedTarget): Promise<FacsimileInfo | null> {
-  const facsimile = await Facsimile.findOne({ where: { sourceId: target.source.id }, order: [['createdAt', 'ASC']] });
+  const facsimile = await Facsimile.findOne({ where: { sourceId: target.source.id }, include: [{ model: User, as: 'uploadedBy', attributes: ['id', 'displayName'] }], order: [['createdAt', 'ASC']] });
   if (!facsimile) return null;
-  return {
-    id: facsimile.id,
-    originalName: facsimile.originalName,
-    mediaType: facsimile.mediaType,
-    pageCount: facsimile.pageCount,
-    page: target.kind === 'excerpt' ? target.item.facsimilePage : 1,
-    access: target.source.facsimileAccess,
-  };
+  return { view: presentFacsimile(facsimile, target.source.publicId), page: target.kind === 'excerpt' ? target.item.facsimilePage : 1 };
 }
 
 function decideAbility(actor: Actor, target: LoadedTarget): { decide: boolean; reason: string | null } {
   if (!reviewPolicy.decide(actor)) return { decide: false, reason: 'Only editors decide on submissions.' };
   if (!reviewPolicy.decideOn(actor, target.item, ownerScope(target))) return { decide: false, reason: ownWorkMessage(target.kind) };
-  if (target.item.status !== 'submitted') return { decide: false, reason: `This ${target.kind} is “${stateLabels[target.item.status]}”, not awaiting review.` };
+  if (target.item.status !== 'submitted') return { decide: false, reason: `This ${target.kind} is “${stateLabels[target.item.status as WorkflowState]}”, not awaiting review.` };
   return { decide: true, reason: null };
 }
 
@@ -66,7 +61,7 @@ export async function buildReviewDetail(actor: Actor, target: LoadedTarget): Pro
     id: item.publicId,
     title: kind === 'source' ? source.title : `${source.title}, ${formatLocator(target.item.locatorType, target.item.locatorValue)}`,
     status: item.status,
-    statusLabel: stateLabels[item.status],
+    statusLabel: stateLabels[item.status as WorkflowState],
     version: item.version,
     approvedVersion: item.approvedVersion,
     contributor: presentCredit(contributor),

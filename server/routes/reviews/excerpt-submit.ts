@@ -8,6 +8,7 @@ import { getSequelize } from '../../db';
 import { assertVersion, lockExcerpt, recordExcerptVersion } from '../../commands/support';
 import { notifyEditorsOfSubmission } from '../../services/notifications';
 import type { SessionUser } from '../../auth/passport';
+import type { WorkflowState } from '@shared/catalogue/vocabulary';
 import { stateLabels, transition } from '@shared/catalogue/workflow';
 import { submitExcerptSchema, targetParamsSchema } from '@shared/review/schemas';
 
@@ -22,10 +23,10 @@ async function submitExcerpt(actor: SessionUser, publicId: string, input: { vers
     if (input.version !== undefined) assertVersion('excerpt', excerpt.version, input.version);
     const next = transition(excerpt.status, 'submit');
     if (!next) {
-      throw conflict(`This excerpt is “${stateLabels[excerpt.status]}” and cannot be submitted: only drafts and returned excerpts go to review.`, { status: `The excerpt is ${excerpt.status}.` });
+      throw conflict(`This excerpt is “${stateLabels[excerpt.status as WorkflowState]}” and cannot be submitted: only drafts and returned excerpts go to review.`, { status: `The excerpt is ${excerpt.status}.` });
     }
     if (!sourceStatesForSingleSubmit.includes(source.status)) {
-      throw conflict(`Its source is “${stateLabels[source.status]}”: submit the source, and its excerpts go to review with it.`, { status: `The source is ${source.status}.` });
+      throw conflict(`Its source is “${stateLabels[source.status as WorkflowState]}”: submit the source, and its excerpts go to review with it.`, { status: `The source is ${source.status}.` });
     }
     const resubmission = excerpt.status === 'returned';
     excerpt.set({ status: next, version: excerpt.version + 1 });

@@ -28,7 +28,8 @@ interface CiteprocEngine {
 export function renderClusters(items: CslItem[], clusters: Cluster[], styleId: string, format: 'text' | 'html') {
   const style = useStyle(styleId);
   // Item-level `locator` and `custom` are data for other tools; citeproc reads pinpoints from the cite items.
-  const data = items.map(({ locator: _locator, custom: _custom, ...item }) => item);
+  // `version` is left out too: Chicago prints it as a software version ("…, version 2"); the permalink carries it.
+  const data = items.map(({ locator: _locator, custom: _custom, version: _version, ...item }) => item);
   const engine = plugins.config.get('@csl').engine(data, styleId, LOCALE, format) as CiteprocEngine;
   const citations = clusters.map((cluster, i) => ({
     citationID: `c${i + 1}`,

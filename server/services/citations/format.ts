@@ -46,7 +46,8 @@ function locatorText(item: CslItem): string | undefined {
  * @book: an item without them is exported as a `document` (→ @misc, which requires nothing).
  */
 function forExport(item: CslItem): CslItem {
-  const { custom: _custom, locator: _locator, 'title-short': _short, ...rest } = item;
+  // `version` would make citation-js write RIS/BibTeX fields of software; the permalink carries the version.
+  const { custom: _custom, locator: _locator, 'title-short': _short, version: _version, ...rest } = item;
   const copy: CslItem = { ...rest };
   const note = archiveNote(item, locatorText(item));
   if (note) copy.note = note;
@@ -72,7 +73,12 @@ export function toRis(citables: Citable[]): string {
     .filter(Boolean);
   return records
     .map((record, i) => {
-      const lines = record.split(/\r?\n/);
+      // citation-js wraps long values onto continuation lines, which the RIS tag format does not allow: join them.
+      const lines: string[] = [];
+      for (const line of record.split(/\r?\n/)) {
+        if (/^[A-Z][A-Z0-9] {2}-/.test(line) || !lines.length) lines.push(line);
+        else lines[lines.length - 1] += line;
+      }
       const shelfmark = citables[i]?.item.archive_location;
       if (shelfmark && !lines.some((l) => l.startsWith('AV  - '))) lines.push(`AV  - ${shelfmark}`);
       return [...lines, 'ER  - '].join('\r\n');
@@ -89,30 +95,65 @@ export function toRis(citables: Citable[]): string {
 function formatStyled(citables: Citable[], format: 'text' | 'html', styleId: string): FormatResult {
   const style = useStyle(styleId);
   const items = citables.map((c) => c.item);
-  const clusters = citables.flatMap((c, i) => [
-    { items: [c.cite], noteIndex: 4 * i + 1 },
-    { items: [c.cite], noteIndex: 4 * i + 3 },
+  const merged = mergeBySource(citables);
+  const clusters = merged.cites.flatMap((cite, i) => [
+    { items: [cite], noteIndex: 4 * i + 1 },
+    { items: [cite], noteIndex: 4 * i + 3 },
   ]);
-  const { texts, bibliography } = renderClusters(items, clusters, styleId, format);
+  const { texts, bibliography } = renderClusters(merged.items, clusters, styleId, format);
   const bibById = new Map(bibliography.map((b) => [b.id, b.text]));
   const entries: FormattedEntry[] = citables.map((c, i) => {
     const first = texts[2 * i];
-    const bib = bibById.get(c.item.id) ?? '';
+    const bib = bibById.get(merged.cites[i].id) ?? '';
     return style.kind === 'note'
       ? { id: c.item.id, note: first, shortNote: texts[2 * i + 1], bibliography: bib }
       : { id: c.item.id, citation: first, bibliography: bib };
   });
   const noteLabel = style.kind === 'note' ? 'Notes' : 'Citations';
+  const seen = new Set<string>();
+  const uniqueBibliography = bibliography.filter((b) => !seen.has(b.text) && seen.add(b.text));
   const bibLabel = style.kind === 'note' ? 'Bibliography' : 'References';
   const lead = entries.map((e) => (style.kind === 'note' ? e.note! : e.citation!));
   if (format === 'text') {
     const numbered = lead.map((t, i) => (style.kind === 'note' ? `${i + 1}. ${t}` : t));
-    const data = `${noteLabel}\n${numbered.join('\n')}\n\n${bibLabel}\n${bibliography.map((b) => b.text).join('\n')}\n`;
+    const data = `${noteLabel}\n${numbered.join('\n')}\n\n${bibLabel}\n${uniqueBibliography.map((b) => b.text).join('\n')}\n`;
     return { data, items, entries };
   }
   const list = lead.map((t) => `<li>${t}</li>`).join('');
   const data =
     `<section class="csl-${style.kind === 'note' ? 'notes' : 'citations'}"><h2>${noteLabel}</h2><${style.kind === 'note' ? 'ol' : 'ul'}>${list}</${style.kind === 'note' ? 'ol' : 'ul'}></section>\n` +
-    `<section class="csl-bibliography"><h2>${bibLabel}</h2><div class="csl-bib-body">${bibliography.map((b) => `<div class="csl-entry">${b.text}</div>`).join('')}</div></section>\n`;
+    `<section class="csl-bibliography"><h2>${bibLabel}</h2><div class="csl-bib-body">${uniqueBibliography.map((b) => `<div class="csl-entry">${b.text}</div>`).join('')}</div></section>\n`;
   return { data, items, entries };
+}
+
+/**
+ * Several excerpts of one source (or a source and its excerpts) are one document: they are cited
+ * as the source item with each excerpt's locator, so the bibliography lists the source once
+ * (otherwise author-date styles would invent "1703a", "1703b"). A lone excerpt keeps its own item,
+ * whose permalink names the excerpt and its version.
+ */
+function mergeBySource(citables: Citable[]): { items: CslItem[]; cites: CiteItem[] } {
+  const sourceOf = (c: Citable) => String(c.item.custom?.sourceId ?? c.item.id);
+  const counts = new Map<string, number>();
+  for (const c of citables) counts.set(sourceOf(c), (counts.get(sourceOf(c)) ?? 0) + 1);
+  const items = new Map<string, CslItem>();
+  const cites = citables.map((c) => {
+    const sourceId = sourceOf(c);
+    if ((counts.get(sourceId) ?? 0) < 2) {
+      items.set(c.item.id, c.item);
+      return c.cite;
+    }
+    const own = citables.find((o) => o.item.id === sourceId)?.item;
+    if (!items.has(sourceId)) items.set(sourceId, own ?? sourceItemOf(c.item));
+    return { ...c.cite, id: sourceId };
+  });
+  return { items: [...items.values()], cites };
+}
+
+/** The source's item, from an excerpt's item (same fields, the source's id, permalink and version). */
+function sourceItemOf(item: CslItem): CslItem {
+  const sourceId = String(item.custom?.sourceId);
+  const version = String(item.custom?.sourceVersion ?? '');
+  const { locator: _locator, ...rest } = item;
+  return { ...rest, id: sourceId, 'citation-key': sourceId, URL: item.URL?.replace(/\/excerpts\/[^/]+\/v\/\d+$/, `/sources/${sourceId}/v/${version}`), version, custom: { windwayId: sourceId, sourceType: item.custom?.sourceType } };
 }

@@ -173,3 +173,14 @@ describe('matching strategy and ranking', () => {
     expect(ids(await books.search('anonymous', { attributesToSearchOn: ['author'] })).sort()).toEqual([3, 5]);
   });
 });
+
+describe('multi-word synonyms', () => {
+  it('a multi-word synonym key matches its alternatives, and multi-word alternatives match as phrases', async () => {
+    // Meilisearch docs — Synonyms: "multi-word synonyms" (e.g. "san francisco" ↔ "sf")
+    const idx = h.client.index('multi_syn');
+    await ok(idx.addDocuments([{ id: 1, t: 'a recorder in C' }, { id: 2, t: 'a flute with a beak' }, { id: 3, t: 'the tenor recorder' }]));
+    await ok(idx.updateSettings({ synonyms: { 'flûte à bec': ['recorder'], taille: ['tenor recorder'] } }));
+    expect(ids(await idx.search('flute a bec ', { matchingStrategy: 'all' })).sort()).toEqual([1, 3]);
+    expect(ids(await idx.search('taille '))).toEqual([3]);
+  });
+});

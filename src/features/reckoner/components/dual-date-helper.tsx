@@ -45,7 +45,9 @@ export function DualDateHelper({ onUse }: { onUse: (value: string) => void }) {
             <span className="figures">{dual.writtenYear}</span>.
           </p>
           <Button size="sm" variant="secondary" onClick={() => onUse(written)}>
-            Reckon <span className="figures">{written}</span> with the year from 25 March
+            <span>
+              Reckon <span className="figures whitespace-nowrap">{written}</span> with the year from 25 March
+            </span>
           </Button>
           <p className="text-ink-muted">English double dates are usually in the Julian calendar too: choose it above.</p>
         </div>

@@ -19,7 +19,7 @@ function FingeredKey({ result }: { result: FingeringResult }) {
         (<KeySignature count={result.keySignature} />)
       </span>
       {crossFingered && (
-        <span className="label-caps ml-2 inline-flex items-center gap-1 rounded-soft border border-caution px-1.5 py-px text-[0.6875rem] text-caution">
+        <span className="label-caps ml-2 inline-flex items-center whitespace-nowrap gap-1 rounded-soft border border-caution px-1.5 py-px text-[0.6875rem] text-caution">
           <span aria-hidden="true">⨯</span>cross-fingered
         </span>
       )}

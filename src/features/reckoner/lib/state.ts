@@ -50,12 +50,14 @@ export function stateFromParams(params: URLSearchParams): ReckonerState {
   };
 }
 
-/** Non-empty fields only, in a fixed order, so the same reckoning always has the same link. */
+/** Fields that say something, in a fixed order, so the same reckoning always has the same link. */
 export function paramsFromState(state: ReckonerState): URLSearchParams {
   const params = new URLSearchParams();
   for (const field of FIELDS) {
     const value = state[field].trim();
-    if (value !== '') params.set(field, value);
+    // The calendar and year start mean nothing without a date, and their defaults need no saying.
+    const implied = (field === 'calendar' || field === 'yearStart') && (state.date.trim() === '' || value === DEFAULT_STATE[field]);
+    if (value !== '' && !implied) params.set(field, value);
   }
   return params;
 }
