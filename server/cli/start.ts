@@ -58,6 +58,7 @@ async function main() {
   const { getSequelize } = await import('../db');
   const { migrateToLatest } = await import('../migrator');
   await migrateToLatest(getSequelize());
+  await (await import('../seeders/sizes')).seedInstrumentSizes();
   if (env.DEMO === '1') await seedDemo(secrets.demoPasswords, log);
   const app = await startWindway({ migrate: false });
   stops.unshift(() => app.close());

@@ -15,7 +15,7 @@
  *   text/html `entries` gives each item's note (or in-text citation) and bibliography entry.
  * - otherwise the export itself: bibtex, ris, text → `text/plain; charset=utf-8`; csl-json →
  *   `application/vnd.citationstyles.csl+json`; html → `text/html; charset=utf-8`.
- *   `download=1` adds `Content-Disposition: attachment; filename="windway-<id>.<ext>"`.
+ *   `download=1` adds `Content-Disposition: attachment; filename=windway-<id>.<ext>`.
  * - text/html in a note style hold the footnote form (with the locator) and the bibliography
  *   entry; in an in-text style, the citation and the reference-list entry (see formatCitations).
  * - An unknown format or style is a 400 naming the field; styles are never silently replaced.

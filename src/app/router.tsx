@@ -70,7 +70,7 @@ export const routes: RouteObject[] = [
           {
             path: 'programmes',
             element: <RequireRole section="Programmes" />,
-            children: [{ index: true, lazy: placeholder('Programmes') }],
+            children: [{ index: true, lazy: () => import('@/features/programmes/routes/programmes') }, { path: ':id', lazy: () => import('@/features/programmes/routes/programme') }],
           },
           {
             path: 'contribute',
@@ -89,6 +89,8 @@ export const routes: RouteObject[] = [
           },
           // ======== END OF SECTIONS BUILT BY OTHER ENGINEERS ========
 
+          { path: 'p/:shareToken', lazy: () => import('@/features/programmes/routes/shared-programme') },
+          { path: 'import', element: <RequireRole roles={contributorRoles} section="Import sources" />, children: [{ index: true, lazy: () => import('@/features/import/routes/import') }] },
           { path: '*', lazy: () => import('./not-found-page') },
         ],
       },

@@ -10,7 +10,7 @@ async function insertRows(sequelize: Sequelize, table: string, columns: string[]
   for (let i = 0; i < rows.length; i += chunk) {
     const values = rows
       .slice(i, i + chunk)
-      .map((r) => `(${[...columns.map((c) => sequelize.escape(r[c] as string | number | null)), `'${now}'`, `'${now}'`].join(',')})`)
+      .map((r) => `(${[...columns.map((c) => (r[c] === null || r[c] === undefined ? 'NULL' : sequelize.escape(r[c] as string | number))), `'${now}'`, `'${now}'`].join(',')})`)
       .join(',');
     await sequelize.query(`INSERT INTO ${table} (${cols.join(',')}) VALUES ${values}`);
   }

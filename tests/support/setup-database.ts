@@ -25,6 +25,7 @@ resetConfigCache();
 const { getSequelize, closeSequelize } = await import('@server/db');
 const { migrateToLatest } = await import('@server/migrator');
 await migrateToLatest(getSequelize());
+await (await import('@server/seeders/sizes')).seedInstrumentSizes();
 
 afterAll(async () => {
   await closeSequelize();

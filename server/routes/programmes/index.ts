@@ -45,14 +45,14 @@ async function sendExport(res: Response, programme: Programme, format: ExportFor
   const rendered = await renderNotes(programme.notesMarkdown, programme.citationStyle);
   const name = slug(programme.title);
   if (format === 'html') {
-    res.type('text/html; charset=utf-8').attachment(`${name}.html`).send(await programmeHtml(programme, rendered));
+    res.attachment(`${name}.html`).type('text/html; charset=utf-8').send(await programmeHtml(programme, rendered));
   } else if (format === 'markdown') {
-    res.type('text/markdown; charset=utf-8').attachment(`${name}.md`).send(await programmeMarkdown(programme, rendered));
+    res.attachment(`${name}.md`).type('text/markdown; charset=utf-8').send(await programmeMarkdown(programme, rendered));
   } else if (format === 'bib') {
-    res.type('text/plain; charset=utf-8').attachment(`${name}.bib`).send(await programmeBib(programme, rendered));
+    res.attachment(`${name}.bib`).type('text/plain; charset=utf-8').send(await programmeBib(programme, rendered));
   } else {
     const buffer = await programmeDocx(programme, rendered);
-    res.type('application/vnd.openxmlformats-officedocument.wordprocessingml.document').attachment(`${name}.docx`).send(buffer);
+    res.attachment(`${name}.docx`).type('application/vnd.openxmlformats-officedocument.wordprocessingml.document').send(buffer);
   }
 }
 

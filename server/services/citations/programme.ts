@@ -80,7 +80,9 @@ export async function renderNotes(text: string, styleId: string, accessed?: Date
     tokenised = tokenised.slice(0, span.start) + span.token + tokenised.slice(span.end);
   }
 
-  const notes: RenderedNote[] = html.texts.map((t, i) => ({ number: i + 1, html: cleanInline(t), text: htmlToText(t) }));
+  // A note is a sentence: a prefix written in lower case ("see") opens it with a capital (CMOS 17 §14.36, from memory).
+  const texts = html.texts.map((t, i) => (style.kind === 'note' && clusters[i]?.items[0]?.prefix ? capitalise(t) : t));
+  const notes: RenderedNote[] = texts.map((t, i) => ({ number: i + 1, html: cleanInline(t), text: htmlToText(t) }));
   const bibliography: BibliographyEntry[] = html.bibliography.map((b) => ({ id: b.id, html: cleanInline(b.text), text: htmlToText(b.text) }));
   const body = sanitizeHtml(await marked.parse(tokenised, { async: true }), {
     allowedTags: sanitizeHtml.defaults.allowedTags.concat(['h1', 'h2', 'sup', 'del']),
@@ -115,4 +117,8 @@ export function escapeText(text: string): string {
 }
 export function escapeAttr(text: string): string {
   return escapeText(text).replace(/"/g, '&quot;');
+}
+
+function capitalise(html: string): string {
+  return html.replace(/^((?:<[^>]+>)*)(\p{Ll})/u, (_m, tags: string, letter: string) => tags + letter.toUpperCase());
 }

@@ -22,7 +22,7 @@ describe('GET /api/excerpts/:id/cite', () => {
     const res = await client.get(`/api/excerpts/${excerptId}/cite?format=bibtex&download=1`);
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toMatch(/^text\/plain/);
-    expect(res.headers['content-disposition']).toBe(`attachment; filename="windway-${excerptId}.bib"`);
+    expect(res.headers['content-disposition']).toBe(`attachment; filename=windway-${excerptId}.bib`);
     // Patashnik, BibTeXing (1988): @unpublished needs author, title, note.
     expect(res.text).toMatch(new RegExp(`^@unpublished\\{${excerptId},`));
     expect(res.text).toMatch(/note = \{fol\. 12v, Loc\. 8687\/3,/);

@@ -46,7 +46,7 @@ describe('GET /api/history/:kind/:id/diff', () => {
     expect(res.status).toBe(200);
     const byField = Object.fromEntries(res.body.data.changes.map((c: { field: string }) => [c.field, c]));
     expect(Object.keys(byField).sort()).toEqual(['mentions', 'translation']);
-    expect(byField.translation.parts).toContainEqual({ value: 'firmly', added: true });
+    expect(byField.translation.parts).toContainEqual({ value: 'firmly, ', added: true });
     expect(byField.mentions.items).toEqual([
       { value: 'flute douce [fr] → alto, probable', change: 'removed' },
       { value: 'flute a bec [fr] → alto, certain', change: 'added' },

@@ -18,6 +18,7 @@ export function getSourceQueryOptions(id: string) {
   });
 }
 
-export function useSource(id: string) {
-  return useQuery(getSourceQueryOptions(id));
+/** Waits while `id` is empty (e.g. until the excerpt that names the source has loaded). */
+export function useSource(id: string, options: { enabled?: boolean } = {}) {
+  return useQuery({ ...getSourceQueryOptions(id), enabled: (options.enabled ?? true) && id !== '' });
 }

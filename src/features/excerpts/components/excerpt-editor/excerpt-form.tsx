@@ -1,0 +1,174 @@
+import { useEffect, useRef, useState } from 'react';
+import { FormProvider, useForm, type Path } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useQueryClient } from '@tanstack/react-query';
+import { createExcerptSchema, type ExcerptFields } from '@shared/catalogue/schemas';
+import type { ExcerptDetail } from '@shared/catalogue/types';
+import { Button } from '@/components/button';
+import { TextField } from '@/components/text-field';
+import { ConflictNotice } from '@/features/contribute/components/conflict-notice';
+import { DraftPrompt } from '@/features/contribute/components/draft-prompt';
+import { ErrorSummary } from '@/features/contribute/components/error-summary';
+import { SaveBar } from '@/features/contribute/components/save-bar';
+import { flattenErrors } from '@/features/contribute/lib/flatten-errors';
+import { mergeChanges } from '@/features/contribute/lib/merge-changes';
+import { useFormDraft } from '@/features/contribute/lib/use-form-draft';
+import { errorMessage, isApiError } from '@/lib/api';
+import { useCreateExcerpt } from '../../api/create-excerpt';
+import { getExcerptQueryOptions } from '../../api/get-excerpt';
+import { useUpdateExcerpt } from '../../api/update-excerpt';
+import { CommentaryField } from './commentary-field';
+import { DateTopicsFields } from './date-topics-fields';
+import { LocatorFields } from './locator-fields';
+import { MentionsField } from './mentions-field';
+import { PitchTagsField } from './pitch-tags-field';
+import { TextFields } from './text-fields';
+import { emptyExcerptValues, excerptFieldLabels, excerptFormId, excerptToFormValues, type ExcerptFormValues } from './values';
+
+export interface ExcerptFormProps {
+  source: { id: string; languages: string[]; dateLabel: string };
+  /** The saved excerpt when editing. */
+  excerpt?: ExcerptDetail;
+  /** The page open in the facsimile viewer beside the form. */
+  currentPage: number | null;
+  onSaved: (excerpt: ExcerptDetail) => void;
+  onCancel?: () => void;
+}
+
+/** A translation's language and translator mean nothing without a translation. */
+function toPayload(fields: ExcerptFields): ExcerptFields {
+  return fields.translation ? fields : { ...fields, translationLanguage: null, translator: null };
+}
+
+/** Transcribe, translate and tag one passage; same safety as the source form (draft, conflicts, inline messages). */
+export function ExcerptForm({ source, excerpt, currentPage, onSaved, onCancel }: ExcerptFormProps) {
+  const queryClient = useQueryClient();
+  const form = useForm<ExcerptFormValues, unknown, ExcerptFields>({
+    resolver: zodResolver(createExcerptSchema),
+    defaultValues: excerpt ? excerptToFormValues(excerpt) : emptyExcerptValues(),
+  });
+  const [version, setVersion] = useState<number | null>(excerpt?.version ?? null);
+  const base = useRef<ExcerptFormValues | null>(excerpt ? excerptToFormValues(excerpt) : null);
+  const draft = useFormDraft(form, excerpt ? `excerpt:${excerpt.id}` : `excerpt:new:${source.id}`, { baseVersion: version });
+  const create = useCreateExcerpt();
+  const update = useUpdateExcerpt();
+  const [reason, setReason] = useState('');
+  const [attempt, setAttempt] = useState(0);
+  const [serverError, setServerError] = useState<unknown>(null);
+  const [conflict, setConflict] = useState<{ reappliedVersion: number | null; overlapping: string[] } | null>(null);
+  const [reapplying, setReapplying] = useState(false);
+  const conflictRef = useRef<HTMLDivElement>(null);
+
+  useEffect(() => {
+    if (conflict && conflict.reappliedVersion === null) conflictRef.current?.focus();
+  }, [conflict]);
+
+  const onError = (error: unknown) => {
+    if (isApiError(error) && error.code === 'conflict') {
+      setConflict({ reappliedVersion: null, overlapping: [] });
+      return;
+    }
+    if (isApiError(error) && error.fields) {
+      for (const [path, message] of Object.entries(error.fields)) form.setError(path as Path<ExcerptFormValues>, { type: 'server', message });
+    }
+    setServerError(error);
+    setAttempt((n) => n + 1);
+  };
+
+  const onValid = (values: ExcerptFields) => {
+    setServerError(null);
+    const done = {
+      onSuccess: (result: { data: ExcerptDetail }) => {
+        draft.clear();
+        setConflict(null);
+        onSaved(result.data);
+      },
+      onError,
+    };
+    if (excerpt && version !== null) update.mutate({ id: excerpt.id, version, changes: toPayload(values), reason: reason.trim() || undefined }, done);
+    else create.mutate({ sourceId: source.id, fields: toPayload(values) }, done);
+  };
+
+  const reapply = async () => {
+    if (!excerpt || !base.current) return;
+    setReapplying(true);
+    try {
+      const latest = await queryClient.fetchQuery({ ...getExcerptQueryOptions(excerpt.id), staleTime: 0 });
+      const latestValues = excerptToFormValues(latest.data);
+      const merged = mergeChanges(base.current, form.getValues(), latestValues);
+      base.current = latestValues;
+      setVersion(latest.data.version);
+      form.reset(merged.values, { keepDefaultValues: true });
+      setConflict({ reappliedVersion: latest.data.version, overlapping: merged.overlapping.map((k) => excerptFieldLabels[k] ?? k) });
+    } catch (error) {
+      setServerError(error);
+      setAttempt((n) => n + 1);
+    } finally {
+      setReapplying(false);
+    }
+  };
+
+  const errors = flattenErrors(form.formState.errors);
+  const serverMessage = serverError && !(isApiError(serverError) && serverError.fields && errors.length) ? errorMessage(serverError) : undefined;
+
+  return (
+    <FormProvider {...form}>
+      <form
+        id={excerptFormId}
+        noValidate
+        aria-label={excerpt ? `Edit excerpt ${excerpt.locator.label}` : 'New excerpt'}
+        onSubmit={form.handleSubmit(onValid, () => {
+          setServerError(null);
+          setAttempt((n) => n + 1);
+        })}
+        className="space-y-6"
+      >
+        {draft.pending && <DraftPrompt draft={draft.pending} currentVersion={version} onRestore={draft.restore} onDiscard={draft.discard} />}
+        {conflict && (
+          <div ref={conflictRef} tabIndex={-1} className="outline-none">
+            <ConflictNotice
+              noun="excerpt"
+              onReapply={() => void reapply()}
+              reapplying={reapplying}
+              reappliedVersion={conflict.reappliedVersion}
+              overlapping={conflict.overlapping}
+            />
+          </div>
+        )}
+        <ErrorSummary
+          attempt={attempt}
+          errors={errors}
+          form={excerptFormId}
+          labels={excerptFieldLabels}
+          message={serverMessage}
+          title={serverError ? 'The excerpt was not saved' : 'Please check these fields'}
+        />
+        <LocatorFields currentPage={currentPage} />
+        <TextFields />
+        <CommentaryField saved={excerpt ? { markdown: excerpt.commentary, html: excerpt.commentaryHtml } : undefined} />
+        <DateTopicsFields sourceDateLabel={source.dateLabel} />
+        <MentionsField defaultLanguage={source.languages[0] ?? 'en'} />
+        <PitchTagsField />
+        {excerpt && (
+          <TextField
+            label="What changed, for the revision history"
+            labelSuffix="(optional)"
+            value={reason}
+            onChange={(event) => setReason(event.target.value)}
+            maxLength={500}
+          />
+        )}
+        <SaveBar savedAt={draft.savedAt}>
+          <Button type="submit" loading={create.isPending || update.isPending}>
+            {excerpt ? 'Save changes' : 'Save excerpt'}
+          </Button>
+          {onCancel && (
+            <Button variant="secondary" onClick={onCancel}>
+              Cancel
+            </Button>
+          )}
+        </SaveBar>
+      </form>
+    </FormProvider>
+  );
+}

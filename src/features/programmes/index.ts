@@ -1,0 +1,1 @@
+export { AddToProgrammeButton, type AddToProgrammeButtonProps } from './components/add-to-programme-button';
