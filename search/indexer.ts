@@ -6,7 +6,8 @@
  * the same time: both only ever send the database's current state.
  */
 import { Op, QueryTypes } from 'sequelize';
-import type { Meilisearch } from 'meilisearch';
+import { Meilisearch } from 'meilisearch';
+import { getConfig } from '@server/config';
 import { getSequelize } from '@server/db';
 import { Excerpt } from '@server/models';
 import { getSearchClient } from './client';
@@ -28,7 +29,7 @@ export interface ReindexResult extends ReindexProgress {
 
 export interface ReindexOptions {
   batchSize?: number;
-  /** Add tasks kept in flight while the next batch is read from the database. */
+  /** Add tasks kept in flight while the next batch is read from the database (1: the service indexes one batch while the next is built). */
   inFlight?: number;
   onProgress?: (p: ReindexProgress) => void;
   client?: Meilisearch;
@@ -47,10 +48,12 @@ async function indexedIds(client: Meilisearch): Promise<string[]> {
 }
 
 export async function reindexAll(options: ReindexOptions = {}): Promise<ReindexResult> {
-  const client = options.client ?? getSearchClient();
-  if (!client) throw new Error('Search is not configured: set MEILI_HOST (and MEILI_KEY).');
-  const batchSize = options.batchSize ?? 2000;
-  const inFlight = Math.max(1, options.inFlight ?? 3);
+  const { MEILI_HOST, MEILI_KEY } = getConfig();
+  if (!getSearchClient() || !MEILI_HOST) throw new Error('Search is not configured: set MEILI_HOST (and MEILI_KEY).');
+  // Its own client: a batch keeps the service busy for seconds, longer than the app's 5 s request timeout.
+  const client = options.client ?? new Meilisearch({ host: MEILI_HOST, apiKey: MEILI_KEY, timeout: 120_000 });
+  const batchSize = options.batchSize ?? 1000;
+  const inFlight = Math.max(1, options.inFlight ?? 1);
   const started = performance.now();
   await ensureIndex(client);
   await applySettings(client);
@@ -68,13 +71,20 @@ export async function reindexAll(options: ReindexOptions = {}): Promise<ReindexR
     return { done, total, elapsedMs, docsPerSecond: done / Math.max(0.001, elapsedMs / 1000) };
   };
 
-  for (;;) {
+  // Keyset paging by id; the next batch is built while the service indexes the last one.
+  const nextBatch = async () => {
     const rows = await Excerpt.findAll({ where: { id: { [Op.gt]: lastId } }, attributes: ['id'], order: [['id', 'ASC']], limit: batchSize, raw: true });
-    if (!rows.length) break;
+    if (!rows.length) return null;
     lastId = rows[rows.length - 1].id;
     const t0 = performance.now();
     const { docs } = await buildDocuments(rows.map((r) => r.id));
     buildMs += performance.now() - t0;
+    return docs;
+  };
+  let upcoming = nextBatch();
+  for (let docs = await upcoming; docs; docs = await upcoming) {
+    upcoming = nextBatch();
+    while (pending.length >= inFlight) await pending.shift();
     const task = await index.addDocuments(docs, { primaryKey: 'id' });
     const count = docs.length;
     pending.push(
@@ -83,7 +93,6 @@ export async function reindexAll(options: ReindexOptions = {}): Promise<ReindexR
         options.onProgress?.(progress());
       }),
     );
-    if (pending.length >= inFlight) await pending.shift();
   }
   await Promise.all(pending);
 

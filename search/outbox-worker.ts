@@ -20,6 +20,7 @@ import { Excerpt } from '@server/models';
 import { getSearchClient } from './client';
 import { buildDocuments } from './documents';
 import { ensureIndex, excerptsUid, waitForTask } from './settings';
+import { reindexAll } from './indexer';
 
 export const BATCH_SIZE = 200;
 const MAX_BACKOFF_S = 300;
@@ -166,10 +167,20 @@ export function startOutboxWorker(options: { intervalMs?: number; log?: (line: s
   let timer: NodeJS.Timeout | undefined;
   let running: Promise<void> | undefined;
   let failing = false;
+  let bootstrapped = false;
 
   const tick = async () => {
     let again = false;
     try {
+      // A fresh install or a wiped search service: build the whole index once, then follow the outbox.
+      const client = getSearchClient();
+      if (!bootstrapped && client) {
+        if (await ensureIndex(client)) {
+          const r = await reindexAll();
+          log(`search index was missing: rebuilt ${r.done} documents in ${(r.elapsedMs / 1000).toFixed(1)} s`);
+        }
+        bootstrapped = true;
+      }
       const r = await drainOnce();
       if (r.error && !failing) log(`search sync failed, will retry: ${r.error}`);
       if (!r.error && failing) log('search sync recovered');

@@ -130,20 +130,23 @@ export async function applySettings(client: Meilisearch, synonyms?: Record<strin
 
 let ensured: string | null = null;
 
-/** Creates the index with its settings once per process (and per index prefix). */
-export async function ensureIndex(client: Meilisearch): Promise<void> {
+/** Creates the index with its settings once per process (and per index prefix); true when it had to create it. */
+export async function ensureIndex(client: Meilisearch): Promise<boolean> {
   const uid = excerptsUid();
-  if (ensured === uid) return;
+  if (ensured === uid) return false;
+  let created = false;
   try {
     const index = await client.getIndex(uid);
     if (index.primaryKey !== 'id') throw new Error(`Index ${uid} has primary key ${index.primaryKey}, expected id`);
   } catch (error) {
     if ((error as { cause?: { code?: string } }).cause?.code !== 'index_not_found') throw error;
-    const created = await client.createIndex(uid, { primaryKey: 'id' });
-    await waitForTask(client, created.taskUid, 'creating the index', ['index_already_exists']);
+    const task = await client.createIndex(uid, { primaryKey: 'id' });
+    await waitForTask(client, task.taskUid, 'creating the index', ['index_already_exists']);
     await applySettings(client);
+    created = true;
   }
   ensured = uid;
+  return created;
 }
 
 export function forgetEnsuredIndex(): void {

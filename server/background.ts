@@ -4,10 +4,12 @@
  * stop function; add a feature's job to this list.
  */
 import { startOutboxWorker } from '@search/outbox-worker';
+import { startFacsimileWork } from './services/facsimile-jobs';
 
 type Job = () => () => Promise<void>;
 
 const jobs: Job[] = [() => startOutboxWorker()];
+jobs.push(() => startFacsimileWork());
 
 export function startBackgroundWork(): () => Promise<void> {
   const stops = jobs.map((job) => job());

@@ -1,6 +1,7 @@
 import type { Migration } from './types';
 import * as m0001 from './0001-users-and-sessions';
 import * as m0002 from './0002-catalogue';
+import * as m0003 from './0003-facsimile-per-source-unique';
 import * as m0004 from './0004-programmes';
 
 /**
@@ -11,5 +12,6 @@ import * as m0004 from './0004-programmes';
 export const migrations: { name: string; up: Migration; down: Migration }[] = [
   { name: '0001-users-and-sessions', ...m0001 },
   { name: '0002-catalogue', ...m0002 },
+  { name: '0003-facsimile-per-source-unique', ...m0003 },
   { name: '0004-programmes', ...m0004 },
 ];

@@ -26,6 +26,13 @@ export const sourcePolicy = {
   publish: (actor: Actor): boolean => isEditor(actor),
   step: (actor: Actor, source: SourceLike): boolean => isOwner(actor, source) || isEditor(actor),
   review: (actor: Actor): boolean => isEditor(actor),
+  /** The facsimile file and its text follow the source's `facsimileAccess` (library terms). */
+  viewFacsimile: (actor: Actor, source: SourceLike & { facsimileAccess: string }): boolean => {
+    if (!sourcePolicy.read(actor, source)) return false;
+    if (source.facsimileAccess === 'public') return true;
+    if (source.facsimileAccess === 'signed-in') return !!actor;
+    return sourcePolicy.readCurrent(actor, source);
+  },
   /** Lists: editors see everything; contributors their own too. */
   seesAll: (actor: Actor): boolean => isEditor(actor),
 };

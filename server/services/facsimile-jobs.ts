@@ -8,7 +8,7 @@ import { Op } from 'sequelize';
 import { Facsimile } from '../models';
 import { getConfig } from '../config';
 import { getFileStore } from '../storage/file-store';
-import { extractFacsimileText } from './text-extraction';
+import { extractFacsimileText, loadPdfWorker } from './text-extraction';
 
 /** A 'running' claim not touched for this long belongs to a process that died. */
 const STALE_CLAIM_MS = 10 * 60 * 1000;
@@ -109,6 +109,7 @@ export function startFacsimileWork(options: { pollMs?: number; sweepEveryMs?: nu
     }
   };
   timer = setTimeout(() => (running = tick()), pollMs);
+  loadPdfWorker().catch((error) => console.error('[facsimiles] could not load the PDF reader', error));
 
   return async () => {
     stopped = true;

@@ -15,7 +15,20 @@ const standardFontDataUrl = `${join(pdfjsRoot, 'standard_fonts')}/`;
 /** How often progress is written while extracting (pages). */
 const PROGRESS_EVERY = 5;
 
+let workerLoaded: Promise<void> | undefined;
+/**
+ * Loads pdf.js's worker module into this process once (Node runs it in-process). It takes
+ * seconds the first time, so the background job starts it early instead of the first upload.
+ */
+export function loadPdfWorker(): Promise<void> {
+  workerLoaded ??= import('pdfjs-dist/legacy/build/pdf.worker.mjs').then((worker) => {
+    (globalThis as { pdfjsWorker?: unknown }).pdfjsWorker = worker;
+  });
+  return workerLoaded;
+}
+
 export async function openPdf(data: Uint8Array): Promise<PDFDocumentProxy> {
+  await loadPdfWorker();
   return getDocument({ data, standardFontDataUrl, isEvalSupported: false, verbosity: 0, stopAtErrors: false }).promise;
 }
 

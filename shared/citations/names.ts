@@ -13,7 +13,7 @@ const PARTICLES = new Set(['de', 'du', 'des', "d'", 'da', 'di', 'del', 'della', 
 
 /**
  * Words that mark a corporate creator (a court, a chapel, a guild…). Such names are
- * written as CSL `literal` so styles never invert them ("Hofkapelle, Dresden").
+ * written as CSL `literal` so styles never invert them ("Hofkapelle, Oderstadt").
  */
 const INSTITUTION =
   /\b(court|chapel|chapter|cathedral|church|abbey|society|company|library|archives?|kapelle|hofkapelle|collegium|academy|acad[eé]mie|accademia|council|office|guild|town|city|consistory|chamber|kammer|orchestra|musicians|waits|corporation|parish|college|university|ministry|board|confr[eé]rie|hof)\b/i;

@@ -85,7 +85,7 @@ export function Layout() {
               <Link to="/sources">Sources</Link>
             </li>
             <li>
-              <a href="/api/openapi.json">API description</a>
+              <Link to="/api-docs">API</Link>
             </li>
           </ul>
         </div>

@@ -60,13 +60,33 @@ export const routes: RouteObject[] = [
           {
             path: 'sources',
             children: [
-              { index: true, lazy: placeholder('Sources') },
-              { path: ':id', lazy: placeholder('Source') },
+              { index: true, lazy: () => import('@/features/sources/routes/sources') },
+              { path: ':id', lazy: () => import('@/features/sources/routes/source') },
+              { path: ':id/v/:version', lazy: () => import('@/features/history/routes/version') },
+              {
+                element: <RequireRole roles={contributorRoles} section="Contribute" />,
+                children: [
+                  { path: ':id/edit', lazy: () => import('@/features/sources/routes/edit-source') },
+                  { path: ':id/excerpts/new', lazy: () => import('@/features/excerpts/routes/new-excerpt') },
+                ],
+              },
             ],
           },
-          { path: 'excerpts/:id', lazy: placeholder('Excerpt') },
-          { path: 'concordance', children: [{ index: true, lazy: placeholder('Concordance') }] },
+          {
+            path: 'excerpts',
+            children: [
+              { path: ':id', lazy: () => import('@/features/excerpts/routes/excerpt') },
+              { path: ':id/v/:version', lazy: () => import('@/features/history/routes/version') },
+              {
+                element: <RequireRole roles={contributorRoles} section="Contribute" />,
+                children: [{ path: ':id/edit', lazy: () => import('@/features/excerpts/routes/edit-excerpt') }],
+              },
+            ],
+          },
+          { path: 'concordance', children: [{ index: true, lazy: () => import('@/features/concordance/routes/concordance') }] },
+          { path: 'history/:kind/:id', lazy: () => import('@/features/history/routes/history') },
           { path: 'reckoner', children: [{ index: true, lazy: () => import('@/features/reckoner/routes/reckoner') }] },
+          { path: 'api-docs', lazy: () => import('@/features/api-docs/routes/api-docs') },
           {
             path: 'programmes',
             element: <RequireRole section="Programmes" />,
@@ -75,17 +95,17 @@ export const routes: RouteObject[] = [
           {
             path: 'contribute',
             element: <RequireRole roles={contributorRoles} section="Contribute" />,
-            children: [{ index: true, lazy: placeholder('Contribute') }],
+            children: [{ index: true, lazy: () => import('@/features/contribute/routes/contribute') }],
           },
           {
             path: 'submissions',
             element: <RequireRole roles={contributorRoles} section="My submissions" />,
-            children: [{ index: true, lazy: placeholder('My submissions') }],
+            children: [{ index: true, lazy: () => import('@/features/submissions/routes/submissions') }, { path: ':kind/:id', lazy: () => import('@/features/submissions/routes/submission') }],
           },
           {
             path: 'review',
             element: <RequireRole roles={editorRoles} section="Review" />,
-            children: [{ index: true, lazy: placeholder('Review') }],
+            children: [{ index: true, lazy: () => import('@/features/review/routes/queue') }, { path: ':kind/:id', lazy: () => import('@/features/review/routes/review') }],
           },
           // ======== END OF SECTIONS BUILT BY OTHER ENGINEERS ========
 

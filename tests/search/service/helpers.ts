@@ -52,7 +52,7 @@ export const SOURCES = [
   { id: 3, title: 'Method for the hautboy', author: 'Anonymous', year: 1695, genre: 'method', instruments: ['oboe'], body: 'Short instructions for the hautboy and its reeds, printed in London.' },
   { id: 4, title: 'Letter on bassoon reeds', author: 'Ozi', year: 1787, genre: 'letter', instruments: ['bassoon'], body: 'Scraping and shaping reeds for the bassoon; the tip must be thin.' },
   { id: 5, title: 'Recorder fingering chart', author: 'Anonymous', year: null, genre: 'chart', instruments: [], body: 'A printed chart of recorder fingerings in the baroque style.' },
-  { id: 6, title: 'Inventory of instruments', author: 'Court of Dresden', year: 1681, genre: 'inventory', instruments: ['flute', 'bassoon', 'shawm'], body: 'Instruments kept by the court: flutes, shawms and a bassoon.' },
+  { id: 6, title: 'Inventory of instruments', author: 'Court of Oderstadt', year: 1681, genre: 'inventory', instruments: ['flute', 'bassoon', 'shawm'], body: 'Instruments kept by the court: flutes, shawms and a bassoon.' },
   { id: 7, title: 'Clarinet tutor', author: 'Lefèvre', year: 1802, genre: 'method', instruments: ['clarinet'], body: 'The clarinet method adopted by the Paris Conservatoire.' },
   { id: 8, title: 'Oboe concerto review', author: "O'Neill", year: 1825, genre: 'review', body: 'A review of a concert in which the oboe soloist played with great taste.' },
 ];

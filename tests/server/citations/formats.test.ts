@@ -22,10 +22,10 @@ describe('BibTeX', () => {
   it('writes a manuscript as @unpublished with author, title and a note carrying locator, shelfmark, archive and place', () => {
     const ms = entries.find((e) => e.key === 'E4R9WD2C')!;
     expect(ms.type).toBe('unpublished');
-    expect(ms.fields.author).toBe('Schmidt, Johann Georg');
+    expect(ms.fields.author).toBe('Quellmann, Jobst Anselm');
     expect(ms.fields.title).toBeTruthy();
     // citation-js writes ASCII-only BibTeX (LaTeX accents), as classic BibTeX expects.
-    expect(ms.fields.note).toBe('fol. 12v, Loc. 8687/3, S{\\" a}chsisches Hauptstaatsarchiv, Dresden');
+    expect(ms.fields.note).toBe('fol. 12v, Loc. 44/7, F{\\" u}rstliches Hausarchiv Velmark, Oderstadt');
   });
 
   // Patashnik, BibTeXing (1988), §3.1: book requires author or editor, title, publisher, year.
@@ -66,13 +66,13 @@ describe('RIS', () => {
     }
     expect(records[0]).toContain('TY  - MANSCPT');
     expect(records[1]).toContain('TY  - BOOK');
-    expect(records[0]).toContain('AV  - Loc. 8687/3');
-    expect(records[0]).toContain('N1  - fol. 12v, Loc. 8687/3');
+    expect(records[0]).toContain('AV  - Loc. 44/7');
+    expect(records[0]).toContain('N1  - fol. 12v, Loc. 44/7');
   });
 
   it('round-trips type, title, authors, date and shelfmark', () => {
     const back = parseBibliographic(ris, 'ris');
-    expect(back[0]).toMatchObject({ type: 'manuscript', title: manuscript.item.title, author: manuscript.item.author, issued: manuscript.item.issued, archive_location: 'Loc. 8687/3', archive: 'Sächsisches Hauptstaatsarchiv' });
+    expect(back[0]).toMatchObject({ type: 'manuscript', title: manuscript.item.title, author: manuscript.item.author, issued: manuscript.item.issued, archive_location: 'Loc. 44/7', archive: 'Fürstliches Hausarchiv Velmark' });
     expect(back[1]).toMatchObject({ type: 'book', title: book.item.title, publisher: 'Christophe Ballard' });
   });
 });
@@ -97,7 +97,7 @@ describe('notes style (CMOS 17 §§14.221–14.231, manuscript collections)', ()
   // CMOS 17 §14.232 note form: item, date, folio, shelfmark/collection, repository, place.
   it('orders a manuscript note: item, date, folio, shelfmark, repository, place', () => {
     const note = entries![0].note!;
-    const order = ['Johann Georg Schmidt', 'Inventarium der Instrumente der Hofkapelle', 'May 12, 1703', 'fol. 12v', 'Loc. 8687/3', 'Sächsisches Hauptstaatsarchiv', 'Dresden'];
+    const order = ['Jobst Anselm Quellmann', 'Inventarium der Instrumente der Hofkapelle', 'May 12, 1703', 'fol. 12v', 'Loc. 44/7', 'Fürstliches Hausarchiv Velmark', 'Oderstadt'];
     const positions = order.map((part) => note.indexOf(part));
     expect(positions.every((p) => p >= 0), note).toBe(true);
     expect([...positions].sort((a, b) => a - b)).toEqual(positions);
@@ -108,20 +108,20 @@ describe('notes style (CMOS 17 §§14.221–14.231, manuscript collections)', ()
   // CMOS 17 §14.29 short form: author's surname, short title, locator.
   it('writes the folio locator as fol. 12v and a later note in short form', () => {
     expect(entries![0].note).toMatch(/fol\. 12v,/);
-    expect(entries![0].shortNote).toBe('Schmidt, “Inventarium der Instrumente der Hofkapelle,” fol. 12v.');
+    expect(entries![0].shortNote).toBe('Quellmann, “Inventarium der Instrumente der Hofkapelle,” fol. 12v.');
   });
 
   // CMOS 17 §14.100 book note (from memory): Author, Title (Place: Publisher, Year); bibliography: Author inverted.
   it('formats a printed book in the note and the bibliography', () => {
     expect(entries![1].note).toBe('Jacques-Martin Hotteterre, Principes de la flute traversiere, ou flute d’Allemagne; de la flute a bec, ou flute douce, et du haut-bois (Paris: Christophe Ballard, 1707), https://windway.example/sources/S3M8ZT4B/v/1.');
     expect(entries![1].bibliography).toMatch(/^Hotteterre, Jacques-Martin\. Principes de la flute traversiere.*\. Paris: Christophe Ballard, 1707\./);
-    expect(entries![0].bibliography).toMatch(/^Schmidt, Johann Georg\. “Inventarium der Instrumente der Hofkapelle,” May 12, 1703\. Loc\. 8687\/3\. Sächsisches Hauptstaatsarchiv\. Dresden\./);
+    expect(entries![0].bibliography).toMatch(/^Quellmann, Jobst Anselm\. “Inventarium der Instrumente der Hofkapelle,” May 12, 1703\. Loc\. 44\/7\. Fürstliches Hausarchiv Velmark\. Oderstadt\./);
   });
 
   it('author-date gives the citation with its locator and a reference list', () => {
     const { entries: ad } = formatCitations([manuscript], 'text', 'author-date');
-    expect(ad![0].citation).toBe('(Schmidt 1703, fol. 12v)');
-    expect(ad![0].bibliography).toMatch(/^Schmidt, Johann Georg\. 1703\./);
+    expect(ad![0].citation).toBe('(Quellmann 1703, fol. 12v)');
+    expect(ad![0].bibliography).toMatch(/^Quellmann, Jobst Anselm\. 1703\./);
   });
 
   it('labels signature and plate locators as written (sig., pl.)', () => {

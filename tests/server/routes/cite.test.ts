@@ -25,7 +25,7 @@ describe('GET /api/excerpts/:id/cite', () => {
     expect(res.headers['content-disposition']).toBe(`attachment; filename=windway-${excerptId}.bib`);
     // Patashnik, BibTeXing (1988): @unpublished needs author, title, note.
     expect(res.text).toMatch(new RegExp(`^@unpublished\\{${excerptId},`));
-    expect(res.text).toMatch(/note = \{fol\. 12v, Loc\. 8687\/3,/);
+    expect(res.text).toMatch(/note = \{fol\. 12v, Loc\. 44\/7,/);
   });
 
   it('exports RIS with TY first and ER last (RIS Format Specifications, 2011)', async () => {
@@ -48,9 +48,9 @@ describe('GET /api/excerpts/:id/cite', () => {
     const res = await (await anonymous()).get(`/api/excerpts/${excerptId}/cite?format=text&style=notes`).set('Accept', 'application/json');
     expect(res.status).toBe(200);
     expect(res.body.style).toBe('notes');
-    expect(res.body.entries[0].note).toMatch(/fol\. 12v, Loc\. 8687\/3, Sächsisches Hauptstaatsarchiv, Dresden/);
-    expect(res.body.entries[0].bibliography).toMatch(/^Schmidt, Johann Georg\./);
-    expect(res.body.data).toMatch(/^Notes\n1\. Johann Georg Schmidt/);
+    expect(res.body.entries[0].note).toMatch(/fol\. 12v, Loc\. 44\/7, Fürstliches Hausarchiv Velmark, Oderstadt/);
+    expect(res.body.entries[0].bibliography).toMatch(/^Quellmann, Jobst Anselm\./);
+    expect(res.body.data).toMatch(/^Notes\n1\. Jobst Anselm Quellmann/);
   });
 
   it('formats HTML in any style from the list, by its id', async () => {
@@ -95,7 +95,7 @@ describe('POST /api/cite', () => {
     const res = await client.post('/api/cite', { ids: [excerptId, bookId, sourceId], format: 'text', style: 'author-date' }).set('Accept', 'application/json');
     expect(res.status).toBe(200);
     expect(res.body.entries.map((e: { id: string }) => e.id)).toEqual([excerptId, bookId, sourceId]);
-    expect(res.body.entries[0].citation).toBe('(Schmidt 1703, fol. 12v)');
+    expect(res.body.entries[0].citation).toBe('(Quellmann 1703, fol. 12v)');
     const bad = await client.post('/api/cite', { ids: [excerptId, draftExcerptId], format: 'bibtex' });
     expect(bad.status).toBe(400);
     expect(bad.body.error.fields['ids.1']).toMatch(/not found or is not public/);

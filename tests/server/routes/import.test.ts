@@ -12,7 +12,7 @@ const bibtex = `@book{hotteterre1707,
 }
 
 @unpublished{inventar1703,
-  author = {Schmidt, Johann Georg},
+  author = {Quellmann, Jobst Anselm},
   title = {Inventarium der Hofkapelle},
   year = {1703},
   note = {Staatsarchiv},
@@ -20,7 +20,7 @@ const bibtex = `@book{hotteterre1707,
 }
 `;
 
-const ris = ['TY  - MANSCPT', 'AU  - Schmidt, Johann Georg', 'TI  - Inventarium der Kammer', 'PY  - 1704', 'PB  - Staatsarchiv Dresden', 'AV  - Loc. 9/1', 'LA  - de', 'ER  - ', ''].join('\r\n');
+const ris = ['TY  - MANSCPT', 'AU  - Quellmann, Jobst Anselm', 'TI  - Inventarium der Kammer', 'PY  - 1704', 'PB  - Staatsarchiv Oderstadt', 'AV  - Loc. 9/1', 'LA  - de', 'ER  - ', ''].join('\r\n');
 
 describe('POST /api/import/preview', () => {
   it('maps BibTeX entries to draft source fields, with the line of each entry', async () => {
@@ -41,7 +41,7 @@ describe('POST /api/import/preview', () => {
     const res = await client.agent.post('/api/import/preview').set('X-CSRF-Token', client.csrfToken).attach('file', Buffer.from(ris), 'export.ris');
     expect(res.status, JSON.stringify(res.body)).toBe(200);
     expect(res.body.data.format).toBe('ris');
-    expect(res.body.data.entries[0].fields).toMatchObject({ title: 'Inventarium der Kammer', holdingInstitution: 'Staatsarchiv Dresden', shelfmark: 'Loc. 9/1', dateEdtf: '1704' });
+    expect(res.body.data.entries[0].fields).toMatchObject({ title: 'Inventarium der Kammer', holdingInstitution: 'Staatsarchiv Oderstadt', shelfmark: 'Loc. 9/1', dateEdtf: '1704' });
   });
 
   it('warns of likely duplicates: same title, date and shelfmark', async () => {

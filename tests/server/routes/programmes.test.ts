@@ -45,7 +45,7 @@ function notesText() {
 }
 
 async function newProgramme(client: Awaited<ReturnType<typeof signedIn>>['client'], extra: object = {}) {
-  const res = await client.post('/api/programmes', { title: 'Music for the Dresden chapel', performanceDate: '2025-11-08', venue: 'St Cecilia’s Hall', performers: [{ name: 'Ana Ruiz', role: 'recorders' }], pieces: [piece], notesMarkdown: notesText(), ...extra });
+  const res = await client.post('/api/programmes', { title: 'Music for the Oderstadt chapel', performanceDate: '2025-11-08', venue: 'St Cecilia’s Hall', performers: [{ name: 'Ana Ruiz', role: 'recorders' }], pieces: [piece], notesMarkdown: notesText(), ...extra });
   expect(res.status, JSON.stringify(res.body)).toBe(201);
   return res.body.data as { id: string; version: number };
 }
@@ -79,14 +79,14 @@ describe('programmes', () => {
     const { notes, bibliography, problems, html } = res.body.data;
     expect(notes.map((n: { number: number }) => n.number)).toEqual([1, 2, 3, 4, 5]);
     // CMOS 17 §14.20 (from memory): the first note on a source in full…
-    expect(notes[0].text).toMatch(/^Johann Georg Schmidt, “Inventarium der Instrumente der Hofkapelle” \(May 12, 1703\), fol\. 12v, Loc\. 8687\/3/);
+    expect(notes[0].text).toMatch(/^Jobst Anselm Quellmann, “Inventarium der Instrumente der Hofkapelle” \(May 12, 1703\), fol\. 12v, Loc\. 44\/7/);
     expect(notes[1].text).toMatch(/^Jacques-Martin Hotteterre, .*\(Paris: Christophe Ballard, 1707\), 12/);
     // …and later ones in short form (CMOS 17 §14.29): the inventory again, with the marker's own folio.
-    expect(notes[2].text).toMatch(/^Schmidt, “Inventarium der Instrumente der Hofkapelle,” fol\. 13r; Anna Bach, “Letter to the Kapellmeister”/);
+    expect(notes[2].text).toMatch(/^Quellmann, “Inventarium der Instrumente der Hofkapelle,” fol\. 13r; Anna Bach, “Letter to the Kapellmeister”/);
     expect(notes[3].text).toMatch(/^See Bach, “Letter to the Kapellmeister,” 3\.$/);
-    expect(notes[4].text).toBe('Schmidt, “Inventarium der Instrumente der Hofkapelle,” fol. 14r.');
+    expect(notes[4].text).toBe('Quellmann, “Inventarium der Instrumente der Hofkapelle,” fol. 14r.');
     // One entry per source, sorted by author (two excerpts of the inventory → one entry).
-    expect(bibliography.map((b: { text: string }) => b.text.split('.')[0])).toEqual(['Bach, Anna', 'Hotteterre, Jacques-Martin', 'Schmidt, Johann Georg']);
+    expect(bibliography.map((b: { text: string }) => b.text.split('.')[0])).toEqual(['Bach, Anna', 'Hotteterre, Jacques-Martin', 'Quellmann, Jobst Anselm']);
     expect(html).toContain('<sup class="footnote-ref"><a href="#fn-1" id="fnref-1">1</a></sup>');
     expect(problems).toMatchObject([
       { kind: 'unknown-id', key: 'E0000000', line: 5 },
@@ -140,11 +140,11 @@ describe('programmes', () => {
   it('exports Markdown with footnotes and a .bib of every cited id', async () => {
     const { client } = await signedIn('reader');
     const programme = await newProgramme(client);
-    const md = await client.get(`/api/programmes/${programme.id}/export?format=markdown`).buffer(true).parse(asText);
+    const md = await client.get(`/api/programmes/${programme.id}/export?format=markdown`).buffer(true).parse(asText as never);
     expect(md.headers['content-type']).toMatch(/^text\/markdown/);
     md.text = md.body as string;
     expect(md.text).toMatch(/four recorders \[\^1\], one of them in D \[\^2\]\./);
-    expect(md.text).toMatch(/^\[\^1\]: Johann Georg Schmidt/m);
+    expect(md.text).toMatch(/^\[\^1\]: Jobst Anselm Quellmann/m);
     expect(md.text).toContain('## Bibliography');
     const bib = await client.get(`/api/programmes/${programme.id}/export?format=bib`);
     for (const id of [e1, book, letters, e3, e2]) expect(bib.text).toContain(`{${id},`);
@@ -158,7 +158,7 @@ describe('programmes', () => {
     expect(token).toMatch(/^[A-Za-z0-9_-]{43}$/);
     const visitor = await anonymous();
     const seen = await visitor.get(`/api/shared-programmes/${token}`);
-    expect(seen.body.data).toMatchObject({ title: 'Music for the Dresden chapel', sharePath: null, ownerName: expect.any(String) });
+    expect(seen.body.data).toMatchObject({ title: 'Music for the Oderstadt chapel', sharePath: null, ownerName: expect.any(String) });
     const rotated = (await client.post(`/api/programmes/${programme.id}/share`)).body.data.sharePath.replace('/p/', '');
     expect(rotated).not.toBe(token);
     expect((await visitor.get(`/api/shared-programmes/${token}`)).status).toBe(404);

@@ -21,7 +21,7 @@ describe('CSL-JSON of a source', () => {
 
   // CSL 1.0.2, Appendix IV "Variables": archive, archive_location, archive-place.
   it('carries archive (holding institution), archive_location (shelfmark) and archive-place', () => {
-    expect(item).toMatchObject({ type: 'manuscript', archive: 'Sächsisches Hauptstaatsarchiv', 'archive-place': 'Dresden', archive_location: 'Loc. 8687/3' });
+    expect(item).toMatchObject({ type: 'manuscript', archive: 'Fürstliches Hausarchiv Velmark', 'archive-place': 'Oderstadt', archive_location: 'Loc. 44/7' });
   });
 
   it('has the permalink with the version, the version, the language and today as accessed', () => {
@@ -33,7 +33,7 @@ describe('CSL-JSON of a source', () => {
   });
 
   it('a compiler with no author is the author (Chicago 17 CSL styles print no compiler)', () => {
-    expect(item.author).toEqual([{ family: 'Schmidt', given: 'Johann Georg' }]);
+    expect(item.author).toEqual([{ family: 'Quellmann', given: 'Jobst Anselm' }]);
   });
 
   it('gives a printed book publisher and place', () => {
@@ -101,7 +101,7 @@ describe('names (CSL 1.0.2 "Name-variables")', () => {
     expect(parseName('Johann Joachim Quantz')).toEqual({ family: 'Quantz', given: 'Johann Joachim' });
     expect(parseName('Jacob van Eyck')).toEqual({ given: 'Jacob', family: 'Eyck', 'non-dropping-particle': 'van' });
     expect(parseName('Michel de La Barre')).toEqual({ given: 'Michel', family: 'La Barre', 'non-dropping-particle': 'de' });
-    expect(parseName('Hofkapelle Dresden')).toEqual({ literal: 'Hofkapelle Dresden' });
+    expect(parseName('Hofkapelle Oderstadt')).toEqual({ literal: 'Hofkapelle Oderstadt' });
     expect(parseName('Hotteterre')).toEqual({ family: 'Hotteterre' });
   });
   it('splits "Institution, City"', () => {

@@ -10,6 +10,8 @@ import { ApiIntro } from '../components/api-intro';
 import { EndpointCard } from '../components/endpoint-card';
 import { endpointsOf, groupEndpoints, matches } from '../lib/openapi';
 
+const anchor = (group: string) => `group-${group.replace(/[^\w-]+/g, '-')}`;
+
 /** /api-docs: the live OpenAPI description as a readable, searchable list of endpoints. */
 export function Component() {
   const openapi = useOpenApi();
@@ -63,7 +65,7 @@ export function Component() {
               <ul className="flex flex-wrap gap-x-4 gap-y-1 text-sm lg:block lg:space-y-1">
                 {groups.map((g) => (
                   <li key={g.group}>
-                    <a href={`#group-${g.group}`}>
+                    <a href={`#${anchor(g.group)}`}>
                       /{g.group} <span className="figures text-ink-faint">({g.endpoints.length})</span>
                     </a>
                   </li>
@@ -73,8 +75,8 @@ export function Component() {
             <div className="space-y-8">
               {groups.length === 0 && <p className="text-ink-muted">No endpoint matches “{deferred}”.</p>}
               {groups.map((g) => (
-                <section key={g.group} id={`group-${g.group}`} aria-labelledby={`group-${g.group}-title`} className="scroll-mt-4 space-y-2">
-                  <h3 id={`group-${g.group}-title`} className="font-mono text-lg text-ink">
+                <section key={g.group} id={anchor(g.group)} aria-labelledby={`${anchor(g.group)}-title`} className="scroll-mt-4 space-y-2">
+                  <h3 id={`${anchor(g.group)}-title`} className="font-mono text-lg text-ink">
                     /{g.group}
                   </h3>
                   {g.endpoints.map((e) => (

@@ -2,6 +2,7 @@ import { useSession, hasRole } from '@/features/auth/api/get-session';
 import { contributorRoles } from '@/lib/roles';
 import { EntryCard } from '../components/entry-card';
 import { HomeSearch } from '../components/home-search';
+import { HomeInsights } from '@/features/insights/components/insights-panel'; // insights charts (issue 9)
 
 export function Component() {
   const { user, role } = useSession();
@@ -50,6 +51,9 @@ export function Component() {
           </EntryCard>
         )}
       </ul>
+
+      {/* insights charts (issue 9): timeline and pitch of all approved material */}
+      <HomeInsights />
     </div>
   );
 }

@@ -20,7 +20,7 @@ const shapes: Record<SymbolName, { d: string; stroked?: boolean }> = {
 export function SizeMark({ style, className }: { style: SizeStyle; className?: string }) {
   const shape = shapes[style.symbol];
   return (
-    <svg viewBox="0 0 12 12" aria-hidden="true" className={cn('inline-block size-3.5 shrink-0', className)}>
+    <svg viewBox="0 0 12 12" width="14" height="14" aria-hidden="true" className={cn('inline-block size-3.5 shrink-0', className)}>
       <path
         d={shape.d}
         fill={shape.stroked ? 'none' : style.color}

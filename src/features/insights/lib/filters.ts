@@ -1,12 +1,23 @@
-import { INSIGHTS_PARAMS, type InsightScope } from '@shared/insights/schema';
+import { INSIGHTS_PARAMS, insightsQuerySchema, type InsightScope } from '@shared/insights/schema';
 
 /**
- * The search filters in a page's URL, as the query string of `GET /api/insights`
- * (only the filter names; paging and sorting stay on the search page).
+ * The search filters in a page's URL, as the query string of `GET /api/insights`:
+ * only the filter names (paging and sorting stay on the search page), and — like the
+ * search page itself — without values that do not validate, so a hand-edited link
+ * still draws the charts of the search the page shows.
  */
 export function insightsQueryString(params: URLSearchParams, scope: InsightScope = 'search'): string {
-  const out = new URLSearchParams();
-  for (const name of INSIGHTS_PARAMS) for (const value of params.getAll(name)) if (value !== '') out.append(name, value);
+  const raw: Record<string, string> = {};
+  for (const name of INSIGHTS_PARAMS) {
+    const values = params.getAll(name).filter((v) => v !== '');
+    if (values.length) raw[name] = values.join(',');
+  }
+  for (let attempt = 0; attempt < INSIGHTS_PARAMS.length; attempt++) {
+    const parsed = insightsQuerySchema.safeParse(raw);
+    if (parsed.success) break;
+    for (const issue of parsed.error.issues) delete raw[String(issue.path[0] ?? '')];
+  }
+  const out = new URLSearchParams(raw);
   if (scope !== 'search') out.set('scope', scope);
   return out.toString();
 }

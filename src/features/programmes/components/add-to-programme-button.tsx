@@ -5,6 +5,7 @@ import { markerFor } from '@shared/programmes/markers';
 import { Button } from '@/components/button';
 import { Select } from '@/components/select';
 import { errorMessage } from '@/lib/api';
+import { useSession } from '@/features/auth/api/get-session';
 import { getProgramme, programmesQueryOptions, updateProgramme } from '../api/programmes';
 import { addQuotation } from './quotations';
 
@@ -19,6 +20,7 @@ export interface AddToProgrammeButtonProps {
 
 /** Appends `[@id, locator]` to a programme's notes and keeps the quotation at hand. Signed-in readers only. */
 export function AddToProgrammeButton({ excerptId, locator = null, quotation = null, sourceTitle = null }: AddToProgrammeButtonProps) {
+  const session = useSession();
   const [open, setOpen] = useState(false);
   const programmes = useQuery({ ...programmesQueryOptions, enabled: open });
   const [choice, setChoice] = useState('');
@@ -40,6 +42,9 @@ export function AddToProgrammeButton({ excerptId, locator = null, quotation = nu
     }
   }
 
+  if (!session.user) {
+    return session.isPending ? null : <p className="text-sm text-ink-muted"><Link to="/sign-in">Sign in</Link> to add this passage to a programme.</p>;
+  }
   if (!open) return <Button variant="secondary" size="sm" onClick={() => setOpen(true)}>Add to programme</Button>;
   return (
     <div className="flex flex-wrap items-end gap-2 rounded-soft border border-rule p-3">

@@ -14,6 +14,7 @@ import { SearchFilters } from '../components/search-filters';
 import { ResultItem } from '../components/result-item';
 import { hasFilters, queryFromUrl, urlOf, withChange } from '../lib/url-state';
 import { useDebounced } from '../lib/use-debounced';
+import { SearchInsights } from '@/features/insights/components/insights-panel'; // insights charts (issue 9)
 
 const sortLabels: Record<SearchQuery['sort'], string> = { relevance: 'Best match', oldest: 'Oldest first', newest: 'Newest first', title: 'Source title' };
 
@@ -113,6 +114,8 @@ export function Component() {
           )}
         </section>
       </div>
+      {/* insights charts (issue 9): follow the URL's filters */}
+      <div className="mt-14"><SearchInsights /></div>
     </div>
   );
 }
