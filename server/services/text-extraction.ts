@@ -21,7 +21,9 @@ let workerLoaded: Promise<void> | undefined;
  * seconds the first time, so the background job starts it early instead of the first upload.
  */
 export function loadPdfWorker(): Promise<void> {
-  workerLoaded ??= import('pdfjs-dist/legacy/build/pdf.worker.mjs').then((worker) => {
+  // A specifier held in a variable: the worker ships no type declarations.
+  const workerModule = 'pdfjs-dist/legacy/build/pdf.worker.mjs';
+  workerLoaded ??= (import(workerModule) as Promise<unknown>).then((worker) => {
     (globalThis as { pdfjsWorker?: unknown }).pdfjsWorker = worker;
   });
   return workerLoaded;

@@ -51,7 +51,7 @@ export function centsBetween(fromHz: number, toHz: number): number {
   return 1200 * Math.log2(toHz / fromHz);
 }
 
-/** Cents of an a′ from modern 440 Hz: 415 → about −100.9. */
+/** Cents of an a′ from modern 440 Hz: 415 → about −101.3. */
 export function centsFromModern(a4Hz: number): number {
   return centsBetween(MODERN_A4_HZ, validateA4(a4Hz));
 }

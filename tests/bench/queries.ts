@@ -86,41 +86,55 @@ export function sqlFor(b: BenchQuery, mode: 'fulltext' | 'like'): { sql: string;
   ];
 }
 
-export interface Latency { n: number; p50: number; p95: number; p99: number; meanHits: number }
+export interface Latency { n: number; p50: number; p95: number; p99: number; meanHits: number; timedOut: number; inner?: Latency }
 
-export function percentiles(ms: number[], hits: number[]): Latency {
+export function percentiles(ms: number[], hits: number[], timedOut = 0): Latency {
   const s = [...ms].sort((a, b) => a - b);
   const at = (p: number) => s[Math.min(s.length - 1, Math.max(0, Math.ceil((p / 100) * s.length) - 1))];
-  return { n: s.length, p50: at(50), p95: at(95), p99: at(99), meanHits: hits.reduce((a, b) => a + b, 0) / Math.max(1, hits.length) };
+  return { n: s.length, p50: at(50), p95: at(95), p99: at(99), meanHits: hits.reduce((a, b) => a + b, 0) / Math.max(1, hits.length), timedOut };
 }
 
-async function timed<T>(queries: T[], warm: number, run: (q: T) => Promise<number>): Promise<Latency> {
+/** Runs `warm` queries unmeasured, then all of them one at a time; `run` returns [hits, inner ms]. */
+async function timed<T>(queries: T[], warm: number, run: (q: T) => Promise<[number, number]>): Promise<Latency> {
   for (const q of queries.slice(0, warm)) await run(q);
   const ms: number[] = [];
+  const inner: number[] = [];
   const hits: number[] = [];
+  let timedOut = 0;
   for (const q of queries) {
     const t = performance.now();
-    hits.push(await run(q));
+    const [n, innerMs] = await run(q);
     ms.push(performance.now() - t);
+    if (n < 0) timedOut++;
+    else hits.push(n);
+    inner.push(innerMs);
   }
-  return percentiles(ms, hits);
+  return { ...percentiles(ms, hits, timedOut), inner: percentiles(inner, hits) };
 }
 
+/** Through the API over HTTP; `inner` is the app's own round trip to the search service (`processingTimeMs`). */
 export function runApi(baseUrl: string, queries: BenchQuery[], warm = 10): Promise<Latency> {
   return timed(queries, warm, async (q) => {
     const res = await fetch(baseUrl + apiPath(q));
     if (!res.ok) throw new Error(`${apiPath(q)} → ${res.status} ${await res.text()}`);
-    return ((await res.json()) as { total: number }).total;
+    const body = (await res.json()) as { total: number; processingTimeMs: number };
+    return [body.total, body.processingTimeMs];
   });
 }
 
-export function runSql(sequelize: Sequelize, queries: BenchQuery[], mode: 'fulltext' | 'like', warm = 3): Promise<Latency> {
+/** The SQL statements of one question; a statement over `limitS` seconds is stopped and counted as timed out. */
+export function runSql(sequelize: Sequelize, queries: BenchQuery[], mode: 'fulltext' | 'like', warm = 3, limitS = 30): Promise<Latency> {
   return timed(queries, warm, async (q) => {
     let total = 0;
     for (const [i, stmt] of sqlFor(q, mode).entries()) {
-      const rows = await sequelize.query<{ n: number }>(stmt.sql, { replacements: stmt.replacements, type: QueryTypes.SELECT });
-      if (i === 1) total = Number(rows[0]?.n ?? 0);
+      try {
+        const rows = await sequelize.query<{ n: number }>(`SET STATEMENT max_statement_time=${limitS} FOR ${stmt.sql}`, { replacements: stmt.replacements, type: QueryTypes.SELECT });
+        if (i === 1) total = Number(rows[0]?.n ?? 0);
+      } catch (error) {
+        if (!/max_statement_time|interrupted/i.test(String(error))) throw error;
+        return [-1, 0];
+      }
     }
-    return total;
+    return [total, 0];
   });
 }

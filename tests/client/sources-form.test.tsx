@@ -185,4 +185,19 @@ describe('SourceForm', () => {
     expect(patches.map((p) => (p.body as { version: number }).version)).toEqual([3, 4]);
     expect(patches[1].body).toMatchObject({ title: 'Account book of the Oderstadt chapel', place: 'Oderstadt (court)' });
   });
+
+  it('converts an Old Style double date to the Gregorian EDTF', async () => {
+    stubFetch(() => json({}));
+    renderForm();
+    fireEvent.click(screen.getByRole('button', { name: /Old Style date helper/ }));
+    fireEvent.change(screen.getByLabelText('Date as the source writes it'), { target: { value: '10 February 1700/01' } });
+
+    // 10 Feb 1700/01 is 10 Feb 1701 (modern year); Julian → Gregorian adds 11 days after the Julian leap day of 1700
+    // (Calendar (New Style) Act 1750; Meeus, Astronomical Algorithms, ch. 7): 21 February 1701.
+    expect(await screen.findByText('21 February 1701')).toBeTruthy();
+    fireEvent.click(screen.getByRole('button', { name: 'Use this date' }));
+    expect((screen.getByLabelText('Date (EDTF)') as HTMLInputElement).value).toBe('1701-02-21');
+    expect((screen.getByLabelText('Calendar') as HTMLSelectElement).value).toBe('old-style');
+    expect(await screen.findByText(/Reads as/)).toBeTruthy();
+  });
 });

@@ -41,9 +41,11 @@ export async function screenshot(page: Page, name: string): Promise<void> {
 export async function signIn(page: Page, role: DemoRole): Promise<void> {
   const account = demoAccount(role);
   await page.goto('/sign-in');
-  await page.getByLabel(/e-mail/i).fill(account.email);
-  await page.getByLabel(/password/i).fill(account.password);
-  await page.getByRole('button', { name: /sign in/i }).click();
+  const form = page.getByRole('form', { name: 'Sign in' });
+  await form.getByLabel('E-mail address').fill(account.email);
+  // exact: the form also has a "Show password" switch.
+  await form.getByLabel('Password', { exact: true }).fill(account.password);
+  await form.getByRole('button', { name: /sign in/i }).click();
   await page.waitForFunction(() => !location.pathname.startsWith('/sign-in'));
 }
 

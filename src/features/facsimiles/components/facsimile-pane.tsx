@@ -33,7 +33,7 @@ export function FacsimilePane({ facsimiles, page, onPageChange, emptyText = 'No 
           containerClassName="mb-2"
         />
       )}
-      <FacsimileViewer key={chosen.id} facsimile={chosen} page={page} onPageChange={onPageChange} className="h-full" />
+      <FacsimileViewer key={chosen.id} facsimile={chosen} page={page} onPageChange={onPageChange} className="min-h-0 flex-1" />
     </div>
   );
 }

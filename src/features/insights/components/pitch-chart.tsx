@@ -35,7 +35,7 @@ export function PitchChart({ points: raw, truncated, headingLevel = 2 }: { point
         height: HEIGHT,
         marginLeft: MARGIN.left,
         marginRight: 64,
-        marginTop: 16,
+        marginTop: 28,
         marginBottom: 30,
         style: { background: 'transparent', fontSize: '12px', fontFamily: 'var(--font-sans)' },
         x: { domain: [YEAR_RANGE.min, YEAR_RANGE.max], tickFormat: 'd', label: null, grid: true },

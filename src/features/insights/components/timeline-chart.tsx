@@ -31,7 +31,7 @@ export function TimelineChart({ timeline, total, onDecade, selectedDecade, decad
   const laid = useMemo(() => layOutSpans(timeline.spans), [timeline.spans]);
   const styles = useMemo(() => stylesIn(timeline.spans.map((s) => s.sizes)), [timeline.spans]);
   const summary = timelineSummary(timeline.spans, timeline.decades, total, timeline.truncated);
-  const laneHeight = laid.lanes > 60 ? Math.max(3, Math.floor(480 / laid.lanes)) : 8;
+  const laneHeight = laid.lanes > 60 ? Math.max(3, Math.floor(480 / laid.lanes)) : laid.lanes > 20 ? 8 : 12;
   const spansHeight = Math.max(80, laid.lanes * laneHeight + 34);
 
   const spansPlot = usePlot(
@@ -85,7 +85,7 @@ export function TimelineChart({ timeline, total, onDecade, selectedDecade, decad
         marginBottom: DECADE_BOX.bottom,
         style: { background: 'transparent', fontSize: '12px', fontFamily: 'var(--font-sans)' },
         x: { domain: DOMAIN, tickFormat: 'd', label: null },
-        y: { label: 'excerpts', grid: true, ticks: 3, tickFormat: 'd' },
+        y: { label: null, grid: true, ticks: 3, tickFormat: 'd' },
         marks: [
           Plot.rectY(timeline.decades, {
             x1: 'decade',

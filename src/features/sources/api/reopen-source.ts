@@ -4,7 +4,7 @@ import { api } from '@/lib/api';
 import { sourcesQueryKey } from './get-sources';
 
 export function reopenSource(id: string): Promise<SourceResponse> {
-  return api.post<SourceResponse>(`/api/sources/${encodeURIComponent(id)}/reopen`);
+  return api.post<SourceResponse>(`/api/sources/${encodeURIComponent(id)}/reopen`, {});
 }
 
 export function useReopenSource() {

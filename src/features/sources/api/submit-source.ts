@@ -4,7 +4,7 @@ import { api } from '@/lib/api';
 import { sourcesQueryKey } from './get-sources';
 
 export function submitSource(id: string): Promise<SubmitSourceResponse> {
-  return api.post<SubmitSourceResponse>(`/api/sources/${encodeURIComponent(id)}/submit`);
+  return api.post<SubmitSourceResponse>(`/api/sources/${encodeURIComponent(id)}/submit`, {});
 }
 
 export function useSubmitSource() {

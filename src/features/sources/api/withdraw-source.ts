@@ -4,7 +4,7 @@ import { api } from '@/lib/api';
 import { sourcesQueryKey } from './get-sources';
 
 export function withdrawSource(id: string): Promise<SourceResponse> {
-  return api.post<SourceResponse>(`/api/sources/${encodeURIComponent(id)}/withdraw`);
+  return api.post<SourceResponse>(`/api/sources/${encodeURIComponent(id)}/withdraw`, {});
 }
 
 export function useWithdrawSource() {

@@ -35,7 +35,7 @@ const languageOptions = [
 
 function yearError(value: string): string | undefined {
   if (!value) return undefined;
-  return /^\d{3,4}$/.test(value) ? undefined : 'Write a year, e.g. 1700';
+  return /^\d{4}$/.test(value) && Number(value) >= 1000 && Number(value) <= 2100 ? undefined : 'Write a year between 1000 and 2100, e.g. 1700';
 }
 
 /** Text, year range and the other filters; text and years apply on submit, choices at once. */

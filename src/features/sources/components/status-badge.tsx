@@ -17,7 +17,7 @@ export function StatusBadge({ status, className }: { status: WorkflowState; clas
   return (
     <span className={cn('inline-flex items-center gap-1 whitespace-nowrap rounded-full border px-2 py-0.5 text-xs font-medium', look.box, className)}>
       <span aria-hidden="true">{look.mark}</span>
-      {stateLabels[status]}
+      <span>{stateLabels[status]}</span>
     </span>
   );
 }

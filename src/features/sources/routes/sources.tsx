@@ -46,8 +46,8 @@ export function Component() {
     q: params.get('q') ?? '',
     type: oneOf<SourceType>(sourceTypes, params.get('type')),
     status: contributor ? oneOf<WorkflowState>(workflowStates, params.get('status')) : '',
-    from: /^\d{3,4}$/.test(params.get('from') ?? '') ? (params.get('from') as string) : '',
-    to: /^\d{3,4}$/.test(params.get('to') ?? '') ? (params.get('to') as string) : '',
+    from: /^1\d{3}$|^20\d{2}$/.test(params.get('from') ?? '') ? (params.get('from') as string) : '',
+    to: /^1\d{3}$|^20\d{2}$/.test(params.get('to') ?? '') ? (params.get('to') as string) : '',
     lang: params.get('lang') ?? '',
     mine: contributor && params.get('mine') === '1',
   };

@@ -44,7 +44,7 @@ export function convertOldStyle(text: string, reading: OldStyleReading): OldStyl
   const value = text.trim();
   if (!value) throw new ReckonerError('written', 'Type the date as the source writes it, e.g. 10 February 1700/01.');
 
-  if (/\d\s*\/\s*\d{1,2}\s*$/.test(value) && /[a-z.]/i.test(value)) {
+  if (/\d\s*\/\s*\d{1,4}\s*$/.test(value) && /[a-z.]/i.test(value)) {
     const dual = parseDualDate(value, 'written');
     const modern = reading.julian ? julianToGregorian(dual.modern, 'written') : dual.modern;
     const steps = [`${value} is ${dayLabel(dual.modern)} with the year counted from 1 January`];
