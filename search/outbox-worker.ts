@@ -167,19 +167,15 @@ export function startOutboxWorker(options: { intervalMs?: number; log?: (line: s
   let timer: NodeJS.Timeout | undefined;
   let running: Promise<void> | undefined;
   let failing = false;
-  let bootstrapped = false;
 
   const tick = async () => {
     let again = false;
     try {
-      // A fresh install or a wiped search service: build the whole index once, then follow the outbox.
+      // A fresh install or a wiped search service: the index is created, then filled from the database.
       const client = getSearchClient();
-      if (!bootstrapped && client) {
-        if (await ensureIndex(client)) {
-          const r = await reindexAll();
-          log(`search index was missing: rebuilt ${r.done} documents in ${(r.elapsedMs / 1000).toFixed(1)} s`);
-        }
-        bootstrapped = true;
+      if (client && (await ensureIndex(client))) {
+        const r = await reindexAll();
+        log(`search index was missing: rebuilt ${r.done} documents in ${(r.elapsedMs / 1000).toFixed(1)} s`);
       }
       const r = await drainOnce();
       if (r.error && !failing) log(`search sync failed, will retry: ${r.error}`);

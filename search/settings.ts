@@ -128,12 +128,16 @@ export async function applySettings(client: Meilisearch, synonyms?: Record<strin
   await waitForTask(client, task.taskUid, 'updating the index settings');
 }
 
-let ensured: string | null = null;
+let ensured: { uid: string; at: number } | null = null;
+const RECHECK_MS = 30_000;
 
-/** Creates the index with its settings once per process (and per index prefix); true when it had to create it. */
+/**
+ * Makes sure the index exists with its settings (checked at most every 30 s per
+ * process); true when it had to create it, so the caller knows to fill it.
+ */
 export async function ensureIndex(client: Meilisearch): Promise<boolean> {
   const uid = excerptsUid();
-  if (ensured === uid) return false;
+  if (ensured?.uid === uid && Date.now() - ensured.at < RECHECK_MS) return false;
   let created = false;
   try {
     const index = await client.getIndex(uid);
@@ -145,7 +149,7 @@ export async function ensureIndex(client: Meilisearch): Promise<boolean> {
     await applySettings(client);
     created = true;
   }
-  ensured = uid;
+  ensured = { uid, at: Date.now() };
   return created;
 }
 

@@ -10,6 +10,7 @@ import { errorHandler } from './http/error-handler';
 import { configurePassport } from './auth/passport';
 import { apiRouter } from './routes';
 import { oaiRouter } from './routes/open-standards/oai';
+import { healthRouter } from './routes/health';
 
 const clientDir = resolve(import.meta.dirname, '../dist');
 
@@ -45,6 +46,9 @@ export function createApp(): Express {
 
   // Harvesters POST read-only OAI-PMH queries without sessions, so it sits before sessions and CSRF.
   app.use('/oai', oaiRouter());
+  // Health needs no session: answered before the session store, so it still reports
+  // `db: 'down'` (not a generic 503) when MariaDB, which holds the sessions, is away.
+  app.use('/api/health', healthRouter());
 
   const sequelize = getSequelize();
   const passport = configurePassport();

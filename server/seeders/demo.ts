@@ -1,5 +1,7 @@
 import { User } from '../models';
 import { hashPassword } from '../auth/password';
+import { seedInstrumentSizes } from './sizes';
+import { seedDemoCatalogue } from './demo-catalogue';
 import type { Role } from '@shared/schemas/auth';
 
 export const demoAccounts: { role: Role; email: string; displayName: string }[] = [
@@ -20,4 +22,8 @@ export async function seedDemo(passwords: Record<Role, string>, log: (line: stri
     await User.create({ ...account, passwordHash: await hashPassword(passwords[account.role]), emailVerifiedAt: new Date() });
     log(`Created demo ${account.role} account ${account.email}`);
   }
+  await seedInstrumentSizes();
+  const contributor = await User.findOne({ where: { email: demoAccounts[1].email } });
+  const editor = await User.findOne({ where: { email: demoAccounts[2].email } });
+  if (contributor && editor) await seedDemoCatalogue({ contributor, editor }, log);
 }

@@ -6,7 +6,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
 import { screenshot } from './support/browser';
-import { actor, launchBrowser, visible } from './support/journey';
+import { actor, facsimileDrawn, launchBrowser, visible } from './support/journey';
 import { runWord } from './support/api';
 import { writeFacsimilePdf } from './support/pdf';
 
@@ -66,7 +66,10 @@ async function addExcerpt(page: Page, sourceId: string, plan: ExcerptPlan, shot?
   await form.getByRole('button', { name: 'Add a pitch tag' }).click();
   await form.getByLabel('Tag 1: what the source says').fill(plan.pitch.statement);
   await form.getByLabel('Tag 1: a′ in Hz').fill(plan.pitch.hz);
-  if (shot) await screenshot(page, shot);
+  if (shot) {
+    await facsimileDrawn(page);
+    await screenshot(page, shot);
+  }
 
   await form.getByRole('button', { name: 'Save excerpt' }).click();
   await page.waitForURL(/\/excerpts\/E[0-9A-Z]{7}$/);
@@ -163,6 +166,8 @@ describe('journey 1: a contributor catalogues a source and submits it', () => {
     await page.getByRole('button', { name: `View ${word}.pdf` }).click();
     await visible(page.getByRole('toolbar', { name: 'Facsimile controls' }));
     await visible(page.getByText('of 40', { exact: true }));
+    await facsimileDrawn(page);
+    await visible(page.getByRole('img', { name: new RegExp(`^${word}\\.pdf, page 1 of 40$`) }));
     await screenshot(page, 'j1-05-facsimile-extracted');
 
     // ---- Three excerpts, tagged by size, pitch and date, with folio locators

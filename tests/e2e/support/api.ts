@@ -136,3 +136,94 @@ export async function waitForExtraction(session: ApiSession, sourceId: string, t
     await new Promise((r) => setTimeout(r, 250));
   }
 }
+
+export interface Scene {
+  word: string;
+  title: string;
+  /** Approved, public, with a 40-page facsimile. */
+  approvedSourceId: string;
+  approvedExcerptId: string;
+  /** Awaiting review. */
+  submittedSourceId: string;
+  submittedExcerptId: string;
+  /** A draft of the demo contributor, where excerpts can be added. */
+  draftSourceId: string;
+  /** A programme of the demo reader citing the approved excerpt. */
+  programmeId: string;
+}
+
+/**
+ * The material the accessibility and keyboard checks look at, made over the API: one approved
+ * source (searchable), one awaiting review, one draft, and a reader's programme.
+ */
+export async function buildScene(prefix: string): Promise<Scene> {
+  const word = runWord(prefix);
+  const title = `Letters on the flute, ${word}`;
+  const contributor = await ApiSession.signIn('contributor');
+  const editor = await ApiSession.signIn('editor');
+  const reader = await ApiSession.signIn('reader');
+  try {
+    const { writeFacsimilePdf } = await import('./pdf');
+    const pdfPath = await writeFacsimilePdf(`${word}.pdf`, { title, pages: 40, marker: word });
+    const excerpt = (folio: string, facsimilePage: number, sizeSlug: string, aHz: number): ExcerptSeed => ({
+      folio,
+      facsimilePage,
+      diplomatic: `The ${sizeSlug.replace('-', ' ')} at ${aHz}, as written on fol. ${folio}, ${word}`,
+      translation: `The ${sizeSlug.replace('-', ' ')} at a′ = ${aHz} Hz (${word}).`,
+      mentions: [{ term: sizeSlug.replace('-', ' '), language: 'en', sizeSlug }],
+      pitchTags: [{ statement: `pitch ${aHz}`, aHz }],
+    });
+    const approved = await catalogueAndSubmit(contributor, {
+      title,
+      dateEdtf: '1719',
+      pdfPath,
+      excerpts: [excerpt('4r', 7, 'voice-flute', 415), excerpt('6v', 12, 'alto', 410)],
+    });
+    await waitForExtraction(contributor, approved.sourceId);
+    await approveSource(editor, approved.sourceId);
+    const submitted = await catalogueAndSubmit(contributor, {
+      title: `Awaiting review: ${title}`,
+      dateEdtf: '1724',
+      pdfPath,
+      excerpts: [excerpt('2r', 3, 'tenor', 415)],
+    });
+    const draft = await contributor.post<SourceResponse>('/api/sources', {
+      title: `Draft: ${title}`,
+      sourceType: 'letter',
+      dateEdtf: '1726',
+      languages: ['en'],
+      holdingInstitution: 'Fictional Library of Windway',
+      shelfmark: 'MS Draft 3',
+      rightsStatement: 'Fictional; free to reproduce.',
+      facsimileAccess: 'public',
+    });
+    await contributor.upload(`/api/sources/${draft.data.id}/facsimiles`, pdfPath, { rightsConfirmed: 'true' });
+    const programme = await reader.post<{ data?: { id: string }; id?: string }>('/api/programmes', { title: `Programme: ${title}` });
+    const programmeId = programme.data?.id ?? programme.id!;
+    const current = await reader.get<{ data?: { version: number }; version?: number }>(`/api/programmes/${programmeId}`);
+    await reader.patch(`/api/programmes/${programmeId}`, {
+      version: current.data?.version ?? current.version,
+      notesMarkdown: `The voice flute at chamber pitch [@${approved.excerptIds[0]}, fol. 4r].\n`,
+    });
+    // Searchable before anyone looks.
+    const deadline = Date.now() + 20_000;
+    for (;;) {
+      const found = await reader.get<{ total: number }>(`/api/search?q=${word}`);
+      if (found.total === 2) break;
+      if (Date.now() > deadline) throw new Error('The approved scene source did not reach the search index');
+      await new Promise((r) => setTimeout(r, 250));
+    }
+    return {
+      word,
+      title,
+      approvedSourceId: approved.sourceId,
+      approvedExcerptId: approved.excerptIds[0]!,
+      submittedSourceId: submitted.sourceId,
+      submittedExcerptId: submitted.excerptIds[0]!,
+      draftSourceId: draft.data.id,
+      programmeId,
+    };
+  } finally {
+    await Promise.all([contributor.dispose(), editor.dispose(), reader.dispose()]);
+  }
+}

@@ -40,3 +40,10 @@ export function linkIn(text: string): URL {
   if (!match) expect.fail(`No link in the mail:\n${text}`);
   return new URL(match[0].replace(/[).,]+$/, ''));
 }
+
+/** Waits until every facsimile viewer on the page has opened its file and drawn its page. */
+export async function facsimileDrawn(page: Page, timeout = 20_000): Promise<void> {
+  await page.getByRole('toolbar', { name: 'Facsimile controls' }).first().waitFor({ timeout });
+  const busy = page.getByText(/^(Opening the facsimile|Drawing page \d+)…$/);
+  await eventually(async () => (await busy.count()) === 0, { timeout, message: 'the facsimile page was not drawn' });
+}

@@ -193,3 +193,50 @@ describe('search text cannot change the filter expression', () => {
     }
   });
 });
+
+describe('every other HTML the server renders from contributed text is inert', () => {
+  it('citations (html), programme notes preview and export, TEI', async () => {
+    // ASVS V5.3.3 — context-aware output encoding; V5.3.2 — correct encoding for XML.
+    const owner = await signedIn('contributor');
+    const joined = PAYLOADS.join(' ');
+    const src = await buildSource(owner.user.id, { title: `Title ${joined}`, creators: [{ name: `Creator ${PAYLOADS[3]}`, role: 'author' }], place: `Place ${PAYLOADS[2]}`, shelfmark: `Shelf ${PAYLOADS[5]}` });
+    const ex = await buildExcerpt(src, { diplomatic: `Diplomatic ${joined}`, translation: `Translation ${PAYLOADS[3]}` });
+    const visitor = await anonymous();
+    for (const style of ['notes', 'author-date']) {
+      for (const id of [src.publicId, ex.publicId]) {
+        const kind = id.startsWith('S') ? 'sources' : 'excerpts';
+        const res = await visitor.get(`/api/${kind}/${id}/cite?format=html&style=${style}`).set('Accept', 'application/json');
+        expect(res.status).toBe(200);
+        // `items` is CSL-JSON data (text); `data` and `entries` are the HTML the cite panel inserts.
+        const html = [res.body.data, ...(res.body.entries ?? []).flatMap((e: Record<string, unknown>) => Object.values(e).filter((v) => typeof v === 'string'))].join('\n');
+        expect(html).toContain('Title');
+        if (process.env.DEBUG_CITE) console.log(kind, style, JSON.stringify(res.body.entries), res.body.data);
+        expect(activeHtml(html), `${kind} ${style}`).toEqual([]);
+      }
+    }
+    const notes = `${joined}\n\nAs the inventory says [@${ex.publicId}, fol. 12v].\n\n<div onclick="window.__pwned=1">raw</div>`;
+    const preview = await owner.client.post('/api/programmes/preview', { notesMarkdown: notes });
+    expect(preview.status).toBe(200);
+    const rendered = [preview.body.data.html, ...preview.body.data.notes.map((n: { html: string }) => n.html), ...preview.body.data.bibliography.map((b: { html: string }) => b.html)].join('\n');
+    expect(activeHtml(rendered)).toEqual([]);
+    const programme = (await owner.client.post('/api/programmes', { title: `Concert ${PAYLOADS[2]}`, notesMarkdown: notes }).expect(201)).body.data;
+    const html = await owner.client.get(`/api/programmes/${programme.id}/export?format=html`).buffer(true).parse((res, done) => {
+      let text = '';
+      res.setEncoding('utf8');
+      res.on('data', (c: string) => (text += c));
+      res.on('end', () => done(null, text));
+    });
+    expect(html.status).toBe(200);
+    // The exported page may carry its own <style>/<meta charset>; nothing that runs code.
+    expect(activeHtml(String(html.body)).filter((m) => !/^<\s*(style|meta)/i.test(m))).toEqual([]);
+    const tei = await visitor.get(`/api/sources/${src.publicId}/tei`).buffer(true).parse((res, done) => {
+      let text = '';
+      res.setEncoding('utf8');
+      res.on('data', (c: string) => (text += c));
+      res.on('end', () => done(null, text));
+    });
+    expect(tei.status).toBe(200);
+    expect(String(tei.body)).not.toMatch(/<script|<img|<iframe|<svg/i);
+    expect(String(tei.body)).toContain('&lt;script&gt;');
+  });
+});

@@ -13,7 +13,8 @@ export function Component() {
         description={
           <>
             Record the document first; once it is saved you can upload its facsimile and transcribe excerpts. Everything stays a
-            private draft until you submit it for review. <Link to="/sources?mine=1">Your sources so far</Link>.
+            private draft until you submit it for review. <Link to="/sources?mine=1">Your sources so far</Link>. Have
+            references in BibTeX or RIS already? <Link to="/import">Import them as drafts</Link>.
           </>
         }
       />

@@ -7,6 +7,7 @@ import { Card } from '@/components/card';
 import { EmptyState } from '@/components/empty-state';
 import { PageHeader } from '@/components/page-header';
 import { PageSpinner } from '@/components/spinner';
+import { CitePanel } from '@/features/citations';
 import { FacsimileList } from '@/features/facsimiles/components/facsimile-list';
 import { FacsimileViewer } from '@/features/facsimiles/components/facsimile-viewer';
 import { UploadPanel } from '@/features/facsimiles/components/upload-panel';
@@ -140,6 +141,7 @@ export function Component() {
               <UploadPanel sourceId={data.id} rightsStatement={data.rightsStatement} />
             </Card>
           )}
+          {data.approvedVersion && <CitePanel target={{ kind: 'source', id: data.id }} />}
         </aside>
       </div>
     </>
