@@ -54,6 +54,7 @@ async function main(): Promise<number> {
       buildClientIfStale(log);
       env.PORT = '0';
       env.SEARCH_INDEX_PREFIX = 'e2e_';
+      env.DEMO = '1';
       const { startWindway } = await import('../index');
       const { getSequelize } = await import('../db');
       const { migrateToLatest } = await import('../migrator');
@@ -65,7 +66,6 @@ async function main(): Promise<number> {
         passwords[role] = `${role}-${randomBytes(9).toString('base64url')}`;
         env[`E2E_PASSWORD_${role.toUpperCase()}`] = passwords[role];
       }
-      env.DEMO = '1';
       await seedDemo(passwords);
       const app = await startWindway({ migrate: false });
       stops.unshift(() => app.close());
@@ -75,7 +75,7 @@ async function main(): Promise<number> {
     const code = await new Promise<number>((resolveCode) => {
       const vitest = spawn(process.execPath, [resolve(root, 'node_modules/vitest/vitest.mjs'), 'run', ...args], {
         cwd: root,
-        env: { ...env, SEARCH_INDEX_PREFIX: '', PORT: '3000' },
+        env: { ...env, SEARCH_INDEX_PREFIX: '', PORT: '3000', DEMO: '0' },
         stdio: 'inherit',
       });
       vitest.once('exit', (exitCode) => resolveCode(exitCode ?? 1));

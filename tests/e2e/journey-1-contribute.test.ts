@@ -6,7 +6,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
 import { screenshot } from './support/browser';
-import { actor, facsimileDrawn, launchBrowser, visible } from './support/journey';
+import { actor, eventually, facsimileDrawn, launchBrowser, visible } from './support/journey';
 import { runWord } from './support/api';
 import { writeFacsimilePdf } from './support/pdf';
 
@@ -152,11 +152,20 @@ describe('journey 1: a contributor catalogues a source and submits it', () => {
     // Slow the upload down, so the progress bar is seen moving.
     const cdp = await contributor.context.newCDPSession(page);
     await cdp.send('Network.enable');
-    await cdp.send('Network.emulateNetworkConditions', { offline: false, latency: 20, downloadThroughput: -1, uploadThroughput: 40 * 1024 });
+    await cdp.send('Network.emulateNetworkConditions', { offline: false, latency: 20, downloadThroughput: -1, uploadThroughput: 20 * 1024 });
     await upload.getByRole('button', { name: 'Upload' }).click();
     const progress = upload.getByRole('progressbar', { name: /^Uploading / });
     await visible(progress);
+    // Part-way: the bar says how far it is, and its fill shows as much.
+    await eventually(async () => Number((await progress.getAttribute('aria-valuenow')) ?? 0) >= 20, { timeout: 20_000, message: 'the upload progress never passed 20 %' });
+    await page.waitForTimeout(350); // the fill's width transition
+    const fill = await progress.evaluate((bar) => {
+      const inner = bar.firstElementChild as HTMLElement;
+      return { value: Number(bar.getAttribute('aria-valuenow')), track: bar.getBoundingClientRect().width, filled: inner.getBoundingClientRect().width };
+    });
     await screenshot(page, 'j1-04-upload-progress');
+    expect(fill.value).toBeLessThan(100);
+    expect(fill.filled / fill.track, `a bar at ${fill.value} % is drawn that full`).toBeGreaterThan(0.1);
     await progress.waitFor({ state: 'detached', timeout: 60_000 });
     await cdp.send('Network.emulateNetworkConditions', { offline: false, latency: 0, downloadThroughput: -1, uploadThroughput: -1 });
     await visible(upload.getByText(`${word}.pdf was uploaded.`));

@@ -91,7 +91,7 @@ describe('journey 2: review by e-mail, return, fix, resubmit, approve', () => {
 
     const contributor = await actor(browser, 'contributor');
     await contributor.page.goto('/submissions');
-    await visible(contributor.page.getByText(/1 item came back with comments/));
+    await visible(contributor.page.getByText(/\d+ items? came back with comments: fix and submit again\./));
     const returnedItem = contributor.page.getByRole('listitem').filter({ has: contributor.page.getByRole('link', { name: `${title}, fol. 5v` }) });
     await visible(returnedItem.getByText('Returned for changes'));
     await visible(returnedItem.getByText(/name the instrument precisely/));

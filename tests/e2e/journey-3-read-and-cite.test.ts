@@ -74,34 +74,56 @@ describe('journey 3: a reader finds, reads, cites and builds a programme', () =>
       { timeout: 20_000, message: 'the approved source did not reach the search index' },
     );
 
-    // ---- Search with the page's filters: size by its checkbox, pitch by the slider (keyboard), years by URL
+    // ---- Search the whole archive with the page's filters: size by its checkbox, pitch by the
+    // slider (keyboard), years by URL; every passage shown must meet all three.
     await page.goto('/search');
-    await page.getByLabel('Words or "a phrase in quotes"').fill(word);
-    await visible(page.getByRole('heading', { name: /^4 passages/ }));
     const filters = page.getByRole('complementary', { name: 'Filters' });
     // The box follows the URL (a navigation), so it shows ticked once the URL has changed.
     const voiceFlute = filters.getByRole('checkbox', { name: 'Voice flute' });
     await voiceFlute.click();
     await page.waitForURL(/size=voice-flute/);
     await eventually(() => voiceFlute.isChecked(), { message: 'the Voice flute box is not ticked after filtering' });
-    await visible(page.getByRole('heading', { name: /^3 passages/ }));
     const highest = filters.getByRole('slider', { name: 'Highest a′ in hertz' });
     await highest.focus();
     await page.keyboard.press('End');
     for (let i = 0; i < 60; i += 1) await page.keyboard.press('ArrowLeft');
     expect(await highest.getAttribute('aria-valuetext')).toBe('420 Hz');
     await page.waitForURL(/aMax=420/);
-    await visible(page.getByRole('heading', { name: /^2 passages/ }));
     const url = new URL(page.url());
     url.searchParams.set('to', '1729');
     await page.goto(`${url.pathname}${url.search}`);
+    await visible(page.getByRole('heading', { name: /^\d+ passages?$/ }));
+    const hits = page.getByRole('article');
+    await visible(hits);
+    const shown = await hits.count();
+    expect(shown).toBeGreaterThan(0);
+    for (let i = 0; i < shown; i += 1) {
+      const hitText = await hits.nth(i).innerText();
+      const tags = await hits.nth(i).locator('dl').innerText();
+      expect(tags, `a filtered passage concerns the voice flute: ${hitText}`).toMatch(/Sizes\s[^\n]*Voice flute/);
+      const hz = [...tags.matchAll(/a′ = ([\d.]+) Hz/g)].map((m) => Number(m[1]));
+      expect(Math.min(...hz), `a filtered passage has a′ ≤ 420 Hz: ${hitText}`).toBeLessThanOrEqual(420);
+      const dateLabel = await hits.nth(i).locator('header p').innerText();
+      const year = Number(/\d{4}/.exec(dateLabel)?.[0]);
+      expect(year, `a filtered passage is from before 1730: ${hitText}`).toBeLessThanOrEqual(1729);
+    }
+    await screenshot(page, 'j3-01-search-filtered');
+
+    // Narrow to this run's source by a word of it: exactly the one passage that meets all three.
+    await page.getByLabel('Words or "a phrase in quotes"').fill(word);
+    await page.waitForURL(new RegExp(`q=${word}`));
     await visible(page.getByRole('heading', { name: /^1 passage$/ }));
-    expect(new URL(page.url()).searchParams.getAll('size')).toEqual(['voice-flute']);
+    const params = new URL(page.url()).searchParams;
+    expect(params.getAll('size')).toEqual(['voice-flute']);
+    expect(params.get('aMax')).toBe('420');
+    expect(params.get('to')).toBe('1729');
     const hit = page.getByRole('article').filter({ has: page.getByRole('link', { name: `${title}, fol. 7r` }) });
     await visible(hit.getByText('Voice flute'));
     await visible(hit.getByText('a′ = 410 Hz'));
     await visible(hit.locator('mark').first());
-    await screenshot(page, 'j3-01-search-filtered');
+    await screenshot(page, 'j3-02-search-narrowed');
+    // Without the filters, the same word finds all four passages of the source.
+    expect(((await (await page.request.get(`/api/search?q=${word}`)).json()) as { total: number }).total).toBe(4);
 
     // ---- Read it beside its facsimile page
     await hit.getByRole('link', { name: `${title}, fol. 7r` }).click();
@@ -113,7 +135,7 @@ describe('journey 3: a reader finds, reads, cites and builds a programme', () =>
     await visible(viewer.getByText('of 40', { exact: true }));
     await visible(page.getByRole('img', { name: new RegExp(`${word}\\.pdf, page 13 of 40`) }));
     await facsimileDrawn(page);
-    await screenshot(page, 'j3-02-excerpt-beside-facsimile');
+    await screenshot(page, 'j3-03-excerpt-beside-facsimile');
 
     // ---- Cite as BibTeX with the folio locator, and download the .bib
     const cite = card(page, 'Cite');
@@ -125,7 +147,7 @@ describe('journey 3: a reader finds, reads, cites and builds a programme', () =>
     expect(bib.text.trimStart()).toMatch(/^@\w+\{/);
     expect(bib.text).toContain('fol. 7r');
     expect(bib.text).toContain(word);
-    await screenshot(page, 'j3-03-cite-bibtex');
+    await screenshot(page, 'j3-04-cite-bibtex');
 
     // ---- Add it to a programme (creating one first when the reader has none)
     const programmeTitle = `Voice flute and harpsichord, ${word}`;
@@ -163,7 +185,7 @@ describe('journey 3: a reader finds, reads, cites and builds a programme', () =>
     await visible(preview.getByRole('listitem').filter({ hasText: 'fol. 7r' }));
     await page.getByRole('button', { name: 'Save', exact: true }).click();
     await visible(page.getByText('Saved.'));
-    await screenshot(page, 'j3-04-programme-notes');
+    await screenshot(page, 'j3-05-programme-notes');
 
     // ---- Exports: HTML, Word, Markdown and BibTeX
     const exports = card(page, 'Export');
@@ -196,7 +218,7 @@ describe('journey 3: a reader finds, reads, cites and builds a programme', () =>
     expect(programmeBib.name).toMatch(/\.bib$/);
     expect(programmeBib.text.trimStart()).toMatch(/^@\w+\{/);
     expect(programmeBib.text).toContain(word);
-    await screenshot(page, 'j3-05-programme-exported');
+    await screenshot(page, 'j3-06-programme-exported');
     await reader.context.close();
   });
 });

@@ -5,6 +5,7 @@ import '@citation-js/plugin-ris';
 import '@citation-js/plugin-csl';
 import type { CiteItem, CslItem } from '@shared/citations/csl';
 import { useStyle } from './styles';
+import { safeCitationHtml } from './safe-html';
 
 export { Cite };
 export const LOCALE = 'en-US';
@@ -40,9 +41,10 @@ export function renderClusters(items: CslItem[], clusters: Cluster[], styleId: s
   }));
   const rendered = citations.length ? engine.rebuildProcessorState(citations, format, []) : [];
   const byId = new Map(rendered.map(([id, , text]) => [id, text]));
-  const texts = citations.map((c) => byId.get(c.citationID) ?? '');
+  const clean = (text: string) => (format === 'html' ? safeCitationHtml(text) : text);
+  const texts = citations.map((c) => clean(byId.get(c.citationID) ?? ''));
   const bib = engine.makeBibliography();
-  const bibliography = bib ? bib[1].map((text, i) => ({ id: String(bib[0].entry_ids[i]?.[0] ?? ''), text: unwrapEntry(text) })) : [];
+  const bibliography = bib ? bib[1].map((text, i) => ({ id: String(bib[0].entry_ids[i]?.[0] ?? ''), text: clean(unwrapEntry(text)) })) : [];
   return { kind: style.kind, texts, bibliography };
 }
 

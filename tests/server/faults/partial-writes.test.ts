@@ -4,7 +4,8 @@
  * The failure is real: a revision row already holding the version the write is about to
  * record makes the revision INSERT hit the unique index (entity_type, entity_id, version)
  * after the record itself was updated.
- * ASVS 4.0.3 V11.1.2-style business-logic integrity (no partial state), V7.4.1 (clear error).
+ * ASVS 4.0.3 V7.4.1 for the error answer; atomicity itself is a reliability requirement of
+ * issue 8 (no ASVS 4.0.3 requirement names it; V1.11.3 on race-free business logic is nearest).
  */
 import { beforeAll, describe, expect, it } from 'vitest';
 import { QueryTypes } from 'sequelize';

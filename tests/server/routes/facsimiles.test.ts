@@ -140,16 +140,30 @@ describe('POST /api/sources/:id/facsimiles', () => {
   });
 });
 
-describe('upload size limit', () => {
-  const previous = process.env.UPLOAD_MAX_BYTES;
+describe('upload size limits', () => {
+  const previous = { bytes: process.env.UPLOAD_MAX_BYTES, pages: process.env.UPLOAD_MAX_PAGES };
   beforeAll(() => {
     process.env.UPLOAD_MAX_BYTES = String(20 * 1024);
+    process.env.UPLOAD_MAX_PAGES = '3';
     resetConfigCache();
   });
   afterAll(() => {
-    if (previous === undefined) delete process.env.UPLOAD_MAX_BYTES;
-    else process.env.UPLOAD_MAX_BYTES = previous;
+    for (const [name, value] of [['UPLOAD_MAX_BYTES', previous.bytes], ['UPLOAD_MAX_PAGES', previous.pages]] as const) {
+      if (value === undefined) delete process.env[name];
+      else process.env[name] = value;
+    }
     resetConfigCache();
+  });
+
+  it('answers 422 for a PDF with more pages than allowed, and keeps nothing', async () => {
+    const { client } = await signedIn('contributor');
+    const source = await createSourceVia(client);
+    const before = storedKeys();
+    const res = await upload(client, source.id, await makePdf(5, (p) => `too many ${p} ${Date.now()}`), 'long.pdf');
+    expect(res.status).toBe(422);
+    expect(res.body.error.message).toMatch(/5 pages; at most 3/);
+    expect(storedKeys()).toEqual(before);
+    expect(tempEntries()).toEqual([]);
   });
 
   it('answers 413 with the limit and keeps nothing', async () => {

@@ -39,6 +39,8 @@ describe('security headers', () => {
       // ASVS V14.3.3 — the server does not advertise its framework.
       expect(res.headers['x-powered-by']).toBeUndefined();
       expect(res.headers['cross-origin-opener-policy']).toBe('same-origin');
+      // ASVS V14.4.5 — HSTS (browsers apply it once the site is served over TLS).
+      expect(res.headers['strict-transport-security']).toMatch(/max-age=\d{7,}/);
     });
   }
 
@@ -49,7 +51,7 @@ describe('security headers', () => {
   });
 
   it('keeps the session responses out of shared caches', async () => {
-    // ASVS V8.2.1 — sensitive data not cached by intermediaries.
+    // ASVS V8.2.1 — anti-caching headers on responses that carry session data (the CSRF token).
     const res = await (await anonymous()).get('/api/auth/me');
     expect(res.headers['cache-control']).toMatch(/no-store/);
   });

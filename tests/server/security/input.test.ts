@@ -3,6 +3,7 @@
  * The browser half (rendered pages, the DOM) is tests/e2e/security.test.ts.
  */
 import { beforeAll, describe, expect, it } from 'vitest';
+import { Window } from 'happy-dom';
 import { drainAll } from '@search/outbox-worker';
 import { anonymous, signedIn, type Client } from '../../support/http';
 import { buildExcerpt, buildSource } from '../../support/factories';
@@ -45,12 +46,25 @@ const excerpt = (p: string) => ({
   pitchTags: [{ statement: `Statement ${p}`, aHz: 415, derivation: 'stated', note: `Pitch note ${p}` }],
 });
 
-/** What makes HTML active: script-capable elements, event handlers, script/data URLs. */
+/**
+ * What would make HTML active once inserted in a page, found by parsing it as a browser
+ * would (happy-dom): script-capable elements, `on*` handlers, script/data URLs.
+ */
 export function activeHtml(html: string): string[] {
+  const window = new Window();
+  const container = window.document.createElement('div');
+  container.innerHTML = html;
   const found: string[] = [];
-  for (const re of [/<\s*(script|iframe|object|embed|svg|math|img|form|style|link|meta|base)\b/gi, /\son[a-z]+\s*=/gi, /(href|src|action)\s*=\s*["']?\s*(javascript|data|vbscript):/gi]) {
-    for (const m of html.matchAll(re)) found.push(m[0]);
+  for (const el of container.querySelectorAll('*')) {
+    const tag = el.tagName.toLowerCase();
+    if (['script', 'iframe', 'object', 'embed', 'svg', 'math', 'img', 'form', 'base', 'link', 'meta', 'frame', 'style'].includes(tag)) found.push(`<${tag}>`);
+    for (const attr of el.getAttributeNames()) {
+      const value = (el.getAttribute(attr) ?? '').replace(/[\s\u0000-\u001f]/g, '').toLowerCase();
+      if (attr.toLowerCase().startsWith('on')) found.push(`<${tag} ${attr}>`);
+      if (/^(javascript|data|vbscript):/.test(value)) found.push(`<${tag} ${attr}=${value.slice(0, 20)}>`);
+    }
   }
+  window.close();
   return found;
 }
 
@@ -60,9 +74,16 @@ beforeAll(async () => {
 });
 
 describe('hostile text is stored as data, verbatim', () => {
+  it('the inertness check itself finds active HTML', () => {
+    expect(activeHtml('<p>fine <a href="https://example.org">x</a></p>')).toEqual([]);
+    for (const bad of ['<img src=x onerror=1>', '<a href=" javascript:x">y</a>', '<script>1</script>', '<p onclick="x">y</p>', '<iframe></iframe>']) {
+      expect(activeHtml(bad), bad).not.toEqual([]);
+    }
+  });
+
   for (const payload of PAYLOADS) {
     it(`in every text field of a source and an excerpt: ${payload}`, async () => {
-      // ASVS 4.0.3 V5.3.4 — parameterised queries: SQL in data stays data; V5.1.3 — input kept as given, encoded on output.
+      // ASVS 4.0.3 V5.3.4 — parameterised queries: SQL in data stays data, stored verbatim.
       const created = await contributor.post('/api/sources', source(payload));
       expect(created.status, JSON.stringify(created.body)).toBe(201);
       const id = created.body.data.id;
@@ -99,7 +120,7 @@ describe('hostile text is stored as data, verbatim', () => {
 
 describe('body limits and types', () => {
   it('refuses a JSON body over 1 MB with 413 and the error contract', async () => {
-    // ASVS V12.1.1 / V13.1.3 — request size limits.
+    // ASVS V12.1.1 (nearest requirement) — oversized requests refused before they cost memory or storage.
     const client = await anonymous();
     const big = { ...source('big'), rightsStatement: 'x'.repeat(1024 * 1024 + 10) };
     const res = await client.post('/api/sources', big);
@@ -115,7 +136,7 @@ describe('body limits and types', () => {
     ['a string for creators (an array)', { ...source('t'), creators: 'Hotteterre' }, 'creators'],
     ['a number for a creator name', { ...source('t'), creators: [{ name: 7, role: 'author' }] }, 'creators.0.name'],
   ])('refuses %s with 400 naming the field', async (_what, body, field) => {
-    // ASVS V5.1.4 — structured data is strongly typed and validated (schema).
+    // ASVS V5.1.4 — structured data strongly typed; V13.2.2 — JSON schema validation before input is processed.
     const res = await contributor.post('/api/sources', body);
     expect(res.status).toBe(400);
     expect(res.body.error.fields).toHaveProperty([field]);
@@ -168,7 +189,7 @@ describe('search text cannot change the filter expression', () => {
   const hitIds = (body: { hits: { excerptId: string }[] }) => body.hits.map((h) => h.excerptId).sort();
 
   it('quotes, operators and parentheses in q find no more than the control', async () => {
-    // ASVS V5.3.4 / V5.3.8-style injection into the search filter: the visibility clause is the server's own.
+    // ASVS V5.3.4 — the search filter is a query language; user text is only ever the query string, never part of the filter.
     const visitor = await anonymous();
     const control = (await visitor.get('/api/search?q=Quirinalis').expect(200)).body;
     expect(hitIds(control)).toEqual([approved]);
@@ -180,6 +201,7 @@ describe('search text cannot change the filter expression', () => {
   });
 
   it('filter parameters accept only known values: an injected size is 400', async () => {
+    // ASVS V5.1.3 — positive validation (allow lists) of every filter value.
     const visitor = await anonymous();
     for (const [query, field] of [
       ['size=alto%22%20OR%20status%3D%22draft', 'size.0'],
@@ -196,7 +218,7 @@ describe('search text cannot change the filter expression', () => {
 
 describe('every other HTML the server renders from contributed text is inert', () => {
   it('citations (html), programme notes preview and export, TEI', async () => {
-    // ASVS V5.3.3 — context-aware output encoding; V5.3.2 — correct encoding for XML.
+    // ASVS V5.3.3 — output escaping against stored XSS; V5.3.1 — encoding for each interpreter (HTML, XML).
     const owner = await signedIn('contributor');
     const joined = PAYLOADS.join(' ');
     const src = await buildSource(owner.user.id, { title: `Title ${joined}`, creators: [{ name: `Creator ${PAYLOADS[3]}`, role: 'author' }], place: `Place ${PAYLOADS[2]}`, shelfmark: `Shelf ${PAYLOADS[5]}` });
@@ -210,7 +232,6 @@ describe('every other HTML the server renders from contributed text is inert', (
         // `items` is CSL-JSON data (text); `data` and `entries` are the HTML the cite panel inserts.
         const html = [res.body.data, ...(res.body.entries ?? []).flatMap((e: Record<string, unknown>) => Object.values(e).filter((v) => typeof v === 'string'))].join('\n');
         expect(html).toContain('Title');
-        if (process.env.DEBUG_CITE) console.log(kind, style, JSON.stringify(res.body.entries), res.body.data);
         expect(activeHtml(html), `${kind} ${style}`).toEqual([]);
       }
     }
