@@ -58,7 +58,7 @@ const SOURCE_TYPES: [SourceType, number][] = [
   ['treatise', 18], ['tutor', 14], ['account', 14], ['inventory', 12], ['letter', 10], ['court-record', 9], ['music-preface', 9], ['diary', 5], ['makers-list', 4], ['newspaper', 3], ['other', 2],
 ];
 const LANG_WEIGHTS: [Lang, number][] = [['en', 30], ['fr', 20], ['de', 20], ['it', 12], ['nl', 8], ['la', 10]];
-const PLACES = ['London', 'Paris', 'Amsterdam', 'Venice', 'Oderstadt', 'Leipzig', 'Rome', 'Vienna', 'Nuremberg', 'Antwerp', 'Lyon', 'Naples', 'Hamburg', 'Oxford', 'Madrid'];
+const PLACES = ['Oderstadt', 'Fenwick Parva', 'Velmark', 'Brannholm', 'Castel Rovena', 'Lindenau', 'Ste-Aulaire-sur-Lys', 'Hoogewerf', 'Marrowby', 'Quellental', 'Torrebianca', 'Saint-Évrard', 'Ashcombe Regis', 'Wendelsee', 'Grevenmoor']; // fictional towns
 const PITCHES = [[392, 20], [403, 8], [415, 30], [430, 8], [440, 14], [466, 15], [480, 5]] as const;
 
 export interface SourceRow {
