@@ -1,5 +1,5 @@
 import { createServer, type Server } from 'node:http';
-import { getConfig } from './config';
+import { getConfig, resetConfigCache } from './config';
 import { createApp } from './app';
 import { closeSequelize, getSequelize } from './db';
 import { migrateToLatest } from './migrator';
@@ -22,6 +22,11 @@ export async function startWindway(options: { migrate?: boolean } = {}): Promise
   });
   const address = server.address();
   const port = typeof address === 'object' && address ? address.port : config.PORT;
+  if (!config.PUBLIC_URL && port !== config.PORT) {
+    // Started on port 0 (tests): links in mail and citations must name the port really in use.
+    process.env.PUBLIC_URL = `http://${config.HOST}:${port}`;
+    resetConfigCache();
+  }
   const stopBackground = startBackgroundWork();
   return {
     url: `http://${config.HOST}:${port}`,

@@ -4,7 +4,7 @@
  * first (so a failed task changes nothing), applies, then logs its op.
  */
 import { ApiError, indexNotFound } from './errors';
-import { SearchIndex, emptyLike, rebuild, type Doc } from './index-store';
+import { SearchIndex, addSliced, emptyLike, rebuild, type Doc } from './index-store';
 import { applySettingsPatch, settingsView, validateSettingsPatch, type Settings } from './settings';
 import { TaskQueue } from './tasks';
 import { Store, type Op } from './persistence';
@@ -16,8 +16,6 @@ import { checkFilterable, evalFilter } from './filter-eval';
 
 const tick = () => new Promise<void>((r) => setImmediate(r));
 const UID_RE = /^[A-Za-z0-9_-]{1,400}$/;
-/** Documents indexed between yields while processing a batch. */
-const CHUNK = 1000;
 
 export class Engine {
   readonly indexes = new Map<string, SearchIndex>();
@@ -158,10 +156,8 @@ export class Engine {
       const pk = resolvePrimaryKey(ix, docs, primaryKey);
       const target = this.ensure(uid, task.uid, pk || null);
       if (pk) target.primaryKey = pk;
-      for (let i = 0; i < docs.length; i += CHUNK) {
-        target.addDocuments(docs.slice(i, i + CHUNK), mode);
-        if (i + CHUNK < docs.length) await tick();
-      }
+      // Time-sliced (a few ms per slice), so searches keep answering while a large batch is indexed.
+      await addSliced(target, docs, mode, tick);
       if (docs.length) this.log(uid, { t: 'docs', task: task.uid, mode, pk, docs });
       return { receivedDocuments: docs.length, indexedDocuments: docs.length };
     }, { indexedDocuments: 0 });

@@ -44,9 +44,11 @@ export class FacetField {
   exists = new U32List();
   nulls = new U32List();
   empties = new U32List();
-  /** slot → value id, -1 none, -2 several (see `multi`) */
+  /** slot → value id, -1 none, -2 several (see `multiAt`) */
   single = new Int32Array(64).fill(-1);
-  readonly multi = new Map<number, number[]>();
+  /** for slots with several values: offset in `multiIds` of [count, id, id, …] (typed arrays, no per-slot objects) */
+  multiAt = new Int32Array(64);
+  readonly multiIds = new U32List(1024);
   private numSorted: Int32Array | null = null;
   private strSorted: Int32Array | null = null;
 
@@ -55,6 +57,7 @@ export class FacetField {
   add(slot: number, doc: unknown): void {
     const { present, value } = getPath(doc, this.path);
     this.single = growI32(this.single, slot + 1);
+    this.single[slot] = -1;
     if (!present) return;
     this.exists.push(slot);
     if (value === null) this.nulls.push(slot);
@@ -77,12 +80,20 @@ export class FacetField {
       if (!ids.includes(id)) { ids.push(id); this.postings[id].push(slot); }
     }
     if (ids.length === 1) this.single[slot] = ids[0];
-    else { this.single[slot] = -2; this.multi.set(slot, ids); }
+    else {
+      this.single[slot] = -2;
+      this.multiAt = growI32(this.multiAt, slot + 1, 0);
+      this.multiAt[slot] = this.multiIds.n;
+      this.multiIds.push(ids.length);
+      for (const id of ids) this.multiIds.push(id);
+    }
   }
 
   idsOf(slot: number): number[] | number {
     const s = this.single[slot];
-    return s === -2 ? this.multi.get(slot) ?? [] : s;
+    if (s !== -2) return s;
+    const a = this.multiIds.a, at = this.multiAt[slot];
+    return Array.from(a.subarray(at + 1, at + 1 + a[at]));
   }
 
   private orIds(size: number, ids: Iterable<number>): Bitset {

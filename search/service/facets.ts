@@ -26,12 +26,12 @@ export function facetDistribution(ix: SearchIndex, names: string[], matched: Arr
   for (const name of names) {
     const f = ix.facet(name)!;
     const counts = new Int32Array(f.display.length);
-    const single = f.single;
+    const single = f.single, multiAt = f.multiAt, multi = f.multiIds.a;
     for (let i = 0; i < matched.length; i++) {
       const s = matched[i];
       const id = single[s];
       if (id >= 0) counts[id]++;
-      else if (id === -2) for (const x of f.multi.get(s) ?? []) counts[x]++;
+      else if (id === -2) { const at = multiAt[s], end = at + 1 + multi[at]; for (let j = at + 1; j < end; j++) counts[multi[j]]++; }
     }
     const ids: number[] = [];
     let min = Infinity, max = -Infinity;

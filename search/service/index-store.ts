@@ -8,7 +8,7 @@
  * filterable / sortable settings change.
  */
 import { defaultSettings, attrMatches, type Settings } from './settings';
-import { Bitset, Posting, growF64, growI32, growU32 } from './structs';
+import { Bitset, Posting, TokenStore, growF64, growI32, growU32 } from './structs';
 import { FacetField, SortField, getPath } from './facet-index';
 import { words } from './normalize';
 
@@ -50,6 +50,9 @@ export class SearchIndex {
   readonly byFirst = new Map<number, number[]>();
   docLen = new Uint32Array(1024);
   totalLen = 0;
+  /** per-slot token streams (phrase verification) */
+  readonly tokens = new TokenStore();
+  private tokBuf = new Int32Array(4096);
   private sortedIds: Int32Array | null = null;
 
   readonly facets = new Map<string, FacetField>();
@@ -162,21 +165,30 @@ export class SearchIndex {
     return parts;
   }
 
+  /** Tokenizes each text once: postings, document length and the token stream in one pass. */
   private indexText(slot: number, doc: Doc): void {
     const parts = this.fieldTexts(doc);
     let len = 0;
+    let buf = this.tokBuf;
+    let n = 0;
     for (const [rank, texts] of parts) {
       const bit = 1 << Math.min(rank, 15);
       for (const text of texts) {
-        for (const w of words(text)) {
+        const ws = words(text);
+        if (n + ws.length + 1 > buf.length) buf = this.tokBuf = growI32(buf, n + ws.length + 1);
+        buf[n++] = -(rank + 1);
+        for (let i = 0; i < ws.length; i++) {
+          const w = ws[i];
           let id = this.vocab.get(w);
           if (id === undefined) id = this.newTerm(w);
           if (this.lastSlot[id] === slot) this.postings[id].bump(bit);
           else { this.postings[id].push(slot, bit); this.lastSlot[id] = slot; }
-          len++;
+          buf[n++] = id;
         }
+        len += ws.length;
       }
     }
+    this.tokens.set(slot, buf, n);
     this.docLen = growU32(this.docLen, slot + 1);
     this.docLen[slot] = len;
     this.totalLen += len;
@@ -184,6 +196,7 @@ export class SearchIndex {
 
   private kill(slot: number): void {
     this.alive.remove(slot);
+    this.tokens.drop(slot);
     this.totalLen -= this.docLen[slot];
     this.docs[slot] = undefined;
     this.live--;
@@ -191,8 +204,15 @@ export class SearchIndex {
 
   /** Adds (replace) or merges (update) already-validated documents. */
   addDocuments(batch: Doc[], mode: 'replace' | 'update'): number {
+    for (const incoming of batch) this.addDocument(incoming, mode);
+    this.touch();
+    return batch.length;
+  }
+
+  /** Adds or merges one document; the caller calls touch() after a run of these. */
+  addDocument(incoming: Doc, mode: 'replace' | 'update'): void {
     const pk = this.primaryKey!;
-    for (const incoming of batch) {
+    {
       const id = String(incoming[pk]);
       const old = this.idToSlot.get(id);
       let doc = incoming;
@@ -215,8 +235,6 @@ export class SearchIndex {
       for (const f of this.facets.values()) f.add(slot, doc);
       for (const f of this.sorts.values()) f.add(slot, doc);
     }
-    this.touch();
-    return batch.length;
   }
 
   deleteIds(ids: string[]): number {
@@ -262,11 +280,22 @@ export function emptyLike(old: SearchIndex, settings: Settings = old.settings): 
 export async function rebuild(old: SearchIndex, settings: Settings, yieldFn: () => Promise<void>): Promise<SearchIndex> {
   const n = emptyLike(old, settings);
   const slots = old.liveSlots();
-  const CHUNK = 2000;
-  for (let i = 0; i < slots.length; i += CHUNK) {
-    n.addDocuments(Array.from(slots.subarray(i, i + CHUNK), (s) => old.docs[s]!), 'replace');
-    await yieldFn();
-  }
+  await addSliced(n, Array.from(slots, (s) => old.docs[s]!), 'replace', yieldFn);
   return n;
+}
+
+/** Work done between two yields to the event loop while indexing (searches wait at most about this long). */
+export const SLICE_MS = 8;
+
+/** Adds documents in time slices of SLICE_MS, yielding in between so searches keep answering. */
+export async function addSliced(ix: SearchIndex, docs: Doc[], mode: 'replace' | 'update', yieldFn: () => Promise<void>): Promise<void> {
+  let i = 0;
+  while (i < docs.length) {
+    const t = performance.now();
+    do ix.addDocument(docs[i++], mode);
+    while (i < docs.length && ((i & 3) !== 0 || performance.now() - t < SLICE_MS));
+    ix.touch();
+    if (i < docs.length) await yieldFn();
+  }
 }
 

@@ -12,11 +12,25 @@ const LATIN_MARKS = /(\p{Script=Latin})\p{M}+/gu;
 const SPECIAL: Record<string, string> = { ß: 'ss', æ: 'ae', œ: 'oe', ø: 'o', ł: 'l', đ: 'd', ð: 'd', þ: 'th', ı: 'i' };
 const SPECIAL_RE = /[ßæœøłđðþı]/g;
 
+function slowFold(lower: string): string {
+  return lower.normalize('NFKD').replace(LATIN_MARKS, '$1').replace(SPECIAL_RE, (c) => SPECIAL[c] ?? c).normalize('NFC');
+}
+
+/** Folded forms of short non-ASCII tokens (the vocabulary repeats, NFKD is costly). */
+const foldCache = new Map<string, string>();
+
 /** Folds one token (or any text) for full-text matching. */
 export function fold(s: string): string {
   const lower = s.toLowerCase();
   if (!NON_ASCII.test(lower)) return lower;
-  return lower.normalize('NFKD').replace(LATIN_MARKS, '$1').replace(SPECIAL_RE, (c) => SPECIAL[c] ?? c).normalize('NFC');
+  if (lower.length > 40) return slowFold(lower);
+  let r = foldCache.get(lower);
+  if (r === undefined) {
+    r = slowFold(lower);
+    if (foldCache.size >= 200_000) foldCache.clear();
+    foldCache.set(lower, r);
+  }
+  return r;
 }
 
 export interface Token {

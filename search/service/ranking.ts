@@ -8,7 +8,6 @@
 import type { SearchIndex } from './index-store';
 import type { Bitset, Posting } from './structs';
 import type { Expansion } from './query';
-import { fold } from './normalize';
 
 const K1 = 1.2;
 const B = 0.75;
@@ -103,36 +102,64 @@ export function matchWord(ix: SearchIndex, cand: Bitset, exps: Expansion[], sear
   }
 }
 
-/** Documents (within candidates) containing the words consecutively in one searchable attribute. */
+/** First index ≥ i in the posting whose slot is ≥ s (galloping, then binary search). */
+function seek(p: Posting, i: number, s: number): number {
+  const d = p.docs;
+  let step = 1, hi = i;
+  while (hi < p.n && d[hi] < s) { i = hi + 1; hi += step; step <<= 1; }
+  if (hi > p.n) hi = p.n;
+  while (i < hi) { const m = (i + hi) >>> 1; if (d[m] < s) i = m + 1; else hi = m; }
+  return i;
+}
+
+/** Lowest attribute rank (≤ 15) where the term ids occur consecutively in one text of the stream, or -1. */
+function phraseIn(v: Int32Array, T: Int32Array, searchMask: number): number {
+  const L = T.length, t0 = T[0];
+  let rank = 0, best = -1;
+  for (let i = 0, end = v.length - L; i <= end; i++) {
+    const x = v[i];
+    if (x < 0) { rank = -x - 1; continue; }
+    if (x !== t0) continue;
+    let k = 1;
+    while (k < L && v[i + k] === T[k]) k++;
+    if (k < L) continue;
+    const r = Math.min(rank, 15);
+    if (((1 << r) & searchMask) !== 0 && (best < 0 || r < best)) { best = r; if (r === 0) break; }
+  }
+  return best;
+}
+
+/**
+ * Documents (within candidates) containing the words consecutively in one
+ * searchable attribute: the postings are intersected starting from the rarest
+ * word (galloping cursors over slot-ordered lists), and only documents having
+ * every word are verified on their token stream (term ids, no text re-read).
+ */
 export function phraseSlots(ix: SearchIndex, cand: Bitset, ws: string[], searchMask: number): { slot: number; attr: number }[] {
   const tids = ws.map((w) => ix.vocab.get(w));
   if (tids.some((t) => t === undefined)) return [];
-  const lists = tids.map((t) => ix.postings[t!]).sort((a, b) => a.n - b.n);
+  const T = Int32Array.from(tids as number[]);
+  const lists = [...new Set(tids as number[])].map((t) => ix.postings[t]).sort((a, b) => a.n - b.n);
   const out: { slot: number; attr: number }[] = [];
-  // One regex over the folded text instead of tokenizing each candidate: words adjacent, separated by non-word characters.
-  const W = '[\\p{L}\\p{N}\\p{M}]';
-  const esc = ws.map((w) => w.replace(/[.*+?^${}()|[\]\\]/g, '\\$&'));
-  const re = new RegExp(`(?:^|(?<!${W}))${esc.join(`(?!${W})(?:[^\\p{L}\\p{N}\\p{M}]+)`)}(?!${W})`, 'u');
-  const inList = (pl: Posting, s: number) => {
-    let lo = 0, hi = pl.n;
-    while (lo < hi) { const m = (lo + hi) >>> 1; if (pl.docs[m] < s) lo = m + 1; else hi = m; }
-    return lo < pl.n && pl.docs[lo] === s && (pl.masks[lo] & searchMask) !== 0;
-  };
-  for (let j = 0; j < lists[0].n; j++) {
-    const s = lists[0].docs[j];
-    if (!cand.has(s) || (lists[0].masks[j] & searchMask) === 0) continue;
-    // Postings are in slot order, so the other words are checked by binary search before reading text.
+  const rare = lists[0];
+  const cur = new Int32Array(lists.length);
+  const cw = cand.words;
+  const views = ix.tokens.views;
+  for (let j = 0; j < rare.n; j++) {
+    const s = rare.docs[j];
+    if ((cw[s >>> 5] & (1 << (s & 31))) === 0 || (rare.masks[j] & searchMask) === 0) continue;
     let all = true;
-    for (let k = 1; k < lists.length && all; k++) all = inList(lists[k], s);
-    if (!all) continue;
-    const doc = ix.docs[s];
-    if (!doc) continue;
-    let best = -1;
-    for (const [rank, texts] of ix.fieldTexts(doc)) {
-      if (((1 << Math.min(rank, 15)) & searchMask) === 0) continue;
-      if (texts.some((t) => re.test(fold(t)))) { best = rank; break; }
+    for (let k = 1; k < lists.length; k++) {
+      const p = lists[k];
+      const c = (cur[k] = seek(p, cur[k], s));
+      if (c >= p.n) { j = rare.n; all = false; break; }
+      if (p.docs[c] !== s || (p.masks[c] & searchMask) === 0) { all = false; break; }
     }
-    if (best >= 0) out.push({ slot: s, attr: Math.min(best, 15) });
+    if (!all) continue;
+    const v = views[s];
+    if (!v) continue;
+    const best = phraseIn(v, T, searchMask);
+    if (best >= 0) out.push({ slot: s, attr: best });
   }
   return out;
 }

@@ -101,3 +101,23 @@ export function growU32(a: Uint32Array<ArrayBuffer>, need: number): Uint32Array<
   b.set(a);
   return b;
 }
+
+/**
+ * Per-slot token streams for phrase matching: term ids in text order, with
+ * `-(attribute rank + 1)` before each text so phrases never span two texts.
+ * Streams live in shared 1M-int blocks (no per-token objects, no doubling
+ * copies of one huge array); a slot's stream is a view into its block.
+ */
+export class TokenStore {
+  private block = new Int32Array(1 << 20);
+  private used = 0;
+  readonly views: (Int32Array | undefined)[] = [];
+  set(slot: number, src: Int32Array, n: number): void {
+    if (n > this.block.length - this.used) { this.block = new Int32Array(Math.max(1 << 20, n)); this.used = 0; }
+    const v = this.block.subarray(this.used, this.used + n);
+    v.set(src.subarray(0, n));
+    this.used += n;
+    this.views[slot] = v;
+  }
+  drop(slot: number): void { this.views[slot] = undefined; }
+}

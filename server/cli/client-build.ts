@@ -21,5 +21,7 @@ export function buildClientIfStale(log: (line: string) => void = console.log): v
   execFileSync(process.execPath, [resolve(root, 'node_modules/vite/bin/vite.js'), 'build', '--logLevel', 'warn'], {
     cwd: root,
     stdio: 'inherit',
+    // Always a production bundle, whatever NODE_ENV the caller runs under (tests set `test`).
+    env: { ...process.env, NODE_ENV: 'production' },
   });
 }

@@ -117,10 +117,18 @@ export function splitArchive(holding: string | null): { archive?: string; place?
 }
 
 /** A short title for subsequent notes: up to the first colon, semicolon or full stop; at most five words. */
+const TRAILING_FUNCTION_WORDS = new Set(
+  'the a an of and or for in on at to with by from de du des la le les et pour sur der die das des und von zu mit für het een van en voor il lo la di del della e per con in da'.split(' '),
+);
+
 export function shortTitle(title: string): string | undefined {
   const head = title.split(/\s*[:;.]\s|,\s+(?:or|ou|oder|o)\s/i)[0].trim();
   const words = head.split(/\s+/);
-  const short = words.length > 5 ? words.slice(0, 4).join(' ') : head;
+  const kept = words.length > 5 ? words.slice(0, 4) : words;
+  // CMOS 17 §14.32 (from memory): a short title keeps the key words, so it never ends on an article,
+  // preposition or conjunction ("Household Book of the" → "Household Book").
+  while (kept.length > 1 && TRAILING_FUNCTION_WORDS.has(kept[kept.length - 1].toLowerCase().replace(/[,;]$/, ''))) kept.pop();
+  const short = kept.join(' ').replace(/[,;]$/, '');
   return short && short !== title ? short : undefined;
 }
 

@@ -11,12 +11,11 @@ import { Wordmark } from './wordmark';
 function useFocusMainOnNavigate() {
   const mainRef = useRef<HTMLElement>(null);
   const { pathname } = useLocation();
-  const first = useRef(true);
+  // Compared with the previous path (not a "first render" flag, which StrictMode's double effects defeat).
+  const previous = useRef(pathname);
   useEffect(() => {
-    if (first.current) {
-      first.current = false;
-      return;
-    }
+    if (previous.current === pathname) return;
+    previous.current = pathname;
     mainRef.current?.focus({ preventScroll: false });
   }, [pathname]);
   return mainRef;

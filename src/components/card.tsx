@@ -1,4 +1,4 @@
-import type { ReactNode } from 'react';
+import { useId, type ReactNode } from 'react';
 import { cn } from '@/lib/cn';
 
 export interface CardProps {
@@ -15,9 +15,17 @@ export interface CardProps {
 export function Card({ title, headingLevel = 2, children, footer, className, as }: CardProps) {
   const Tag = as ?? (title ? 'section' : 'div');
   const Heading = `h${headingLevel}` as 'h2' | 'h3' | 'h4';
+  const headingId = useId();
   return (
-    <Tag className={cn('rounded-soft border border-rule bg-paper-raised p-5 shadow-leaf', className)}>
-      {title && <Heading className="mb-3 font-serif text-xl font-medium text-ink">{title}</Heading>}
+    <Tag
+      className={cn('rounded-soft border border-rule bg-paper-raised p-5 shadow-leaf', className)}
+      aria-labelledby={title && Tag !== 'div' ? headingId : undefined}
+    >
+      {title && (
+        <Heading id={headingId} className="mb-3 font-serif text-xl font-medium text-ink">
+          {title}
+        </Heading>
+      )}
       {children}
       {footer && <div className="mt-4 border-t border-rule pt-3">{footer}</div>}
     </Tag>

@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { validate } from '../../http/validate';
-import { authorize } from '../../policies';
+import { allow, authorize, isSignedIn } from '../../policies';
 import { excerptPolicy } from '../../policies/excerpt';
 import { reviewPolicy } from '../../policies/review';
 import { conflict, notFound } from '../../errors';
@@ -44,7 +44,7 @@ async function submitExcerpt(actor: SessionUser, publicId: string, input: { vers
  */
 export function excerptSubmitRouter(): Router {
   const router = Router();
-  router.post('/:id/submit', validate({ params: targetParamsSchema.pick({ id: true }), body: submitExcerptSchema }), async (req, res) => {
+  router.post('/:id/submit', allow(isSignedIn), validate({ params: targetParamsSchema.pick({ id: true }), body: submitExcerptSchema }), async (req, res) => {
     const excerpt = await submitExcerpt(req.user!, req.params.id as string, req.body);
     await notifyEditorsOfSubmission(excerpt);
     res.json({ data: { id: excerpt.publicId, status: excerpt.status, version: excerpt.version } });

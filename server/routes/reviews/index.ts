@@ -1,4 +1,5 @@
 import { Router } from 'express';
+import { notFound } from '../../errors';
 import { Op } from 'sequelize';
 import { validate } from '../../http/validate';
 import { allow, authorize } from '../../policies';
@@ -63,7 +64,10 @@ export function reviewsRouter(): Router {
 
   router.get('/:kind/:id', validate({ params: targetParamsSchema }), async (req, res) => {
     const target = await findTarget(req.params.kind as EntityKind, req.params.id as string);
-    authorize(req.user, reviewPolicy.read(req.user, target.item, ownerScope(target)), 'Only editors and the contributor see this review.');
+    const allowed = reviewPolicy.read(req.user, target.item, ownerScope(target));
+    // Signed-in strangers learn nothing of another's unpublished work: it does not exist for them.
+    if (!allowed && req.user && target.item.status !== 'approved') throw notFound('This item');
+    authorize(req.user, allowed, 'Only editors and the contributor see this review.');
     res.json({ data: await buildReviewDetail(req.user, target) });
   });
 

@@ -93,8 +93,7 @@ export const routeExpectations: Record<string, Row> = {
   'PATCH /api/excerpts/:id · approved': row([401, 403, OK, 403, OK, OK], async (w) => ({ path: `/api/excerpts/${(await w.record('approved')).e}`, body: { version: 1, diplomatic: 'Changed' } })),
   'GET /api/excerpts/:id/revisions': row(DRAFT_READ, async (w) => path(`/api/excerpts/${(await w.record()).e}/revisions`)),
   'GET /api/excerpts/:id/revisions/:version': row(DRAFT_READ, async (w) => path(`/api/excerpts/${(await w.record()).e}/revisions/1`)),
-  // Anonymous gets 404 here, not 401: the route loads the excerpt before it checks the session (nothing leaks either way).
-  'POST /api/excerpts/:id/submit': row([404, 404, OK, 404, OK, OK], async (w) => ({ path: `/api/excerpts/${(await w.record('approved', 'draft')).e}/submit`, body: {} })),
+  'POST /api/excerpts/:id/submit': row([401, 404, OK, 404, OK, OK], async (w) => ({ path: `/api/excerpts/${(await w.record('approved', 'draft')).e}/submit`, body: {} })),
   'GET /api/excerpts/:id/cite': row(NOBODY, async (w) => path(`/api/excerpts/${(await w.record()).e}/cite?format=ris`)),
   'GET /api/excerpts/:id/cite · approved': row(PUBLIC, async (w) => path(`/api/excerpts/${(await w.record('approved')).e}/cite?format=ris`)),
   'GET /api/cite/styles': row(PUBLIC, () => path('/api/cite/styles')),
@@ -128,8 +127,8 @@ export const routeExpectations: Record<string, Row> = {
   'GET /api/reviews': row(EDITORS, () => path('/api/reviews')),
   'POST /api/reviews': row(EDITORS, async (w) => ({ path: '/api/reviews', body: { target: { kind: 'source', id: (await w.record('submitted')).s, version: 1 }, decision: 'return', comment: 'Please check the shelfmark.' } })),
   'GET /api/reviews/mine': row(CONTRIBUTORS, () => path('/api/reviews/mine')),
-  // Signed-in strangers get 403 (not 404) for a draft's review page: see the report.
-  'GET /api/reviews/:kind/:id': row([401, 403, OK, 403, OK, OK], async (w) => path(`/api/reviews/source/${(await w.record()).s}`)),
+  // A draft's review page does not exist for signed-in strangers (404, as for the draft itself).
+  'GET /api/reviews/:kind/:id': row([401, 404, OK, 404, OK, OK], async (w) => path(`/api/reviews/source/${(await w.record()).s}`)),
   'GET /api/history/:kind/:id': row(DRAFT_READ, async (w) => path(`/api/history/source/${(await w.record()).s}`)),
   'GET /api/history/:kind/:id · approved': row(PUBLIC, async (w) => path(`/api/history/excerpt/${(await w.record('approved')).e}`)),
   'GET /api/history/:kind/:id/diff': row(DRAFT_READ, async (w) => path(`/api/history/source/${(await w.twoVersions()).s}/diff`)),

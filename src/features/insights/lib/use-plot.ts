@@ -43,6 +43,10 @@ export function usePlot(draw: (Plot: PlotModule, width: number) => SVGSVGElement
         const svg = drawn instanceof SVGSVGElement ? drawn : drawn.querySelector('svg');
         svg?.setAttribute('role', 'img');
         svg?.setAttribute('aria-label', label);
+        // Inside role="img" the marks are presentational; Plot's own aria-labels on them are not allowed there.
+        svg?.querySelectorAll('[aria-label]').forEach((el) => {
+          if (el !== svg) el.removeAttribute('aria-label');
+        });
         ref.current.replaceChildren(drawn);
         setStatus('ready');
       })
