@@ -85,7 +85,8 @@ export function TimelineChart({ timeline, total, onDecade, selectedDecade, decad
         marginBottom: DECADE_BOX.bottom,
         style: { background: 'transparent', fontSize: '12px', fontFamily: 'var(--font-sans)' },
         x: { domain: DOMAIN, tickFormat: 'd', label: null },
-        y: { label: null, grid: true, ticks: 3, tickFormat: 'd' },
+        // Whole excerpts only: small counts get one tick per integer, not repeated rounded labels.
+        y: { label: null, grid: true, ticks: integerTicks(Math.max(0, ...timeline.decades.map((d) => d.count))), tickFormat: 'd' },
         marks: [
           Plot.rectY(timeline.decades, {
             x1: 'decade',
@@ -144,4 +145,9 @@ export function TimelineChart({ timeline, total, onDecade, selectedDecade, decad
       <p className="mt-1 text-sm text-ink-muted">Choose a decade bar (or focus the bars and use the arrow keys and Enter) to {decadeVerb} that decade.</p>
     </ChartFrame>
   );
+}
+
+/** Tick values for a count axis: every integer up to 4, otherwise Plot's own three nice ticks. */
+function integerTicks(max: number): number[] | number {
+  return max <= 4 ? Array.from({ length: max + 1 }, (_, i) => i) : 3;
 }
