@@ -1,3 +1,4 @@
+import type { Transaction } from 'sequelize';
 import type { SessionUser } from '../auth/passport';
 import { getSequelize } from '../db';
 import { Source } from '../models';
@@ -7,25 +8,28 @@ import { dateColumns, recordSourceVersion } from './support';
 
 /** A new draft source at version 1, with its first revision and search outbox row, in one transaction. */
 export async function createSource(actor: SessionUser, input: SourceFields): Promise<Source> {
+  return getSequelize().transaction((transaction) => insertDraftSource(actor, input, 'Created', transaction));
+}
+
+/** The insert itself, inside the caller's transaction (an import creates many sources in one). */
+export async function insertDraftSource(actor: SessionUser, input: SourceFields, reason: string, transaction: Transaction): Promise<Source> {
   const date = dateColumns(input.dateEdtf);
-  return getSequelize().transaction(async (transaction) => {
-    const source = await Source.create(
-      {
-        ...input,
-        publicId: newPublicId('S'),
-        dateEdtf: date.dateEdtf!,
-        dateEarliest: date.dateEarliest!,
-        dateLatest: date.dateLatest!,
-        dateLabel: date.dateLabel!,
-        status: 'draft',
-        version: 1,
-        approvedVersion: null,
-        submittedAt: null,
-        contributorId: actor.id,
-      },
-      { transaction },
-    );
-    await recordSourceVersion(source, actor.id, 'Created', transaction);
-    return source;
-  });
+  const source = await Source.create(
+    {
+      ...input,
+      publicId: newPublicId('S'),
+      dateEdtf: date.dateEdtf!,
+      dateEarliest: date.dateEarliest!,
+      dateLatest: date.dateLatest!,
+      dateLabel: date.dateLabel!,
+      status: 'draft',
+      version: 1,
+      approvedVersion: null,
+      submittedAt: null,
+      contributorId: actor.id,
+    },
+    { transaction },
+  );
+  await recordSourceVersion(source, actor.id, reason, transaction);
+  return source;
 }

@@ -19,9 +19,8 @@ import { sourcePolicy } from '../../policies/source';
 import { Source } from '../../models';
 import { badRequest } from '../../errors';
 import { getSequelize } from '../../db';
-import { newPublicId } from '../../services/public-ids';
 import { parseBibliographic } from '../../services/citations';
-import { dateColumns, recordSourceVersion } from '../../commands/support';
+import { insertDraftSource } from '../../commands/create-source';
 
 const MAX_BYTES = 2 * 1024 * 1024;
 export const MAX_ENTRIES = 200;
@@ -100,24 +99,7 @@ export function importRouter(): Router {
     const created = await getSequelize().transaction(async (transaction) => {
       const rows: Source[] = [];
       for (const input of entries) {
-        const date = dateColumns(input.dateEdtf);
-        const source = await Source.create(
-          {
-            ...input,
-            publicId: newPublicId('S'),
-            dateEdtf: date.dateEdtf!,
-            dateEarliest: date.dateEarliest!,
-            dateLatest: date.dateLatest!,
-            dateLabel: date.dateLabel!,
-            status: 'draft',
-            version: 1,
-            approvedVersion: null,
-            submittedAt: null,
-            contributorId: actor.id,
-          },
-          { transaction },
-        );
-        await recordSourceVersion(source, actor.id, 'Imported from BibTeX/RIS', transaction);
+        const source = await insertDraftSource(actor, input, 'Imported from BibTeX/RIS', transaction);
         rows.push(source);
       }
       return rows;
