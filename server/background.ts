@@ -8,8 +8,7 @@ import { startFacsimileWork } from './services/facsimile-jobs';
 
 type Job = () => () => Promise<void>;
 
-const jobs: Job[] = [() => startOutboxWorker()];
-jobs.push(() => startFacsimileWork());
+const jobs: Job[] = [() => startOutboxWorker(), () => startFacsimileWork()];
 
 export function startBackgroundWork(): () => Promise<void> {
   const stops = jobs.map((job) => job());

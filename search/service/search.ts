@@ -81,7 +81,8 @@ export function runSearch(ix: SearchIndex, p: SearchParams, indexUid = ix.uid): 
     else { const t = ix.vocab.get(u.words[0]); if (t !== undefined) { const pl = ix.postings[t]; for (let j = 0; j < pl.n; j++) cand.remove(pl.docs[j]); } }
   }
   // Stop words are ignored in the query, except a last word still being typed.
-  const pos: QueryUnit[] = units.filter((u) => !u.negative && !(u.kind === 'word' && !u.prefix && ix.stopSet.has(u.words[0])));
+  const kept = units.filter((u) => !u.negative);
+  const pos: QueryUnit[] = kept.filter((u) => !(u.kind === 'word' && !u.prefix && ix.stopSet.has(u.words[0])));
 
   let matched: Uint32Array;
   let better: (a: number, b: number) => boolean;
@@ -109,18 +110,23 @@ export function runSearch(ix: SearchIndex, p: SearchParams, indexUid = ix.uid): 
       counts.push(S.commitUnit(1 << i));
     });
     // Multi-word synonym keys ("flute a bec" → recorder): an alternative's match counts for every word it stands for.
+    // Spans run over the typed words including stop words ("à" in "flûte à bec"), which carry no unit bit of their own.
+    const bitOf = kept.map((u) => { const j = pos.indexOf(u); return j >= 0 ? 1 << j : 0; });
     for (let len = 2; len <= 4; len++) {
-      for (let i = 0; i + len <= n; i++) {
-        const span = pos.slice(i, i + len);
+      for (let i = 0; i + len <= kept.length; i++) {
+        const span = kept.slice(i, i + len);
         if (span.some((u) => u.kind !== 'word')) continue;
         const alts = ix.synonyms.get(span.map((u) => u.words[0]).join(' '));
         if (!alts?.length) continue;
+        let bits = 0;
+        for (let j = i; j < i + len; j++) bits |= bitOf[j];
+        if (!bits) continue;
         for (const alt of alts) {
           if (alt.length === 1) { const tid = ix.vocab.get(alt[0]); if (tid !== undefined) matchWord(ix, cand, [{ tid, typos: 0, prefix: false }], searchMask, typoMask); }
           else matchPhrase(ix, cand, alt, searchMask);
           highlight.push(...alt);
         }
-        S.commitUnit(((1 << len) - 1) << i);
+        S.commitUnit(bits);
       }
     }
     // Required unit sets per "words" level, per matching strategy.

@@ -183,4 +183,14 @@ describe('multi-word synonyms', () => {
     expect(ids(await idx.search('flute a bec ', { matchingStrategy: 'all' })).sort()).toEqual([1, 3]);
     expect(ids(await idx.search('taille '))).toEqual([3]);
   });
+
+  it('a multi-word synonym key matches when it contains a stop word, in any case and with or without accents', async () => {
+    // Meilisearch docs — Synonyms: multi-word synonyms (the whole key is one unit of the query)
+    const idx = h.client.index('multi_syn_stop');
+    await ok(idx.addDocuments([{ id: 1, t: 'an alto recorder' }, { id: 2, t: 'la flûte douce' }, { id: 3, t: 'a recorder' }, { id: 4, t: 'a bec' }]));
+    await ok(idx.updateSettings({ stopWords: ['a', 'la'], synonyms: { 'flûte à bec': ['recorder'], 'flûte douce': ['alto recorder'] } }));
+    expect(ids(await idx.search('Flûte à bec', { matchingStrategy: 'all' })).sort()).toEqual([1, 3]);
+    expect(ids(await idx.search('flute a bec ', { matchingStrategy: 'all' })).sort()).toEqual([1, 3]);
+    expect(ids(await idx.search('flute douce', { matchingStrategy: 'all' })).sort()).toEqual([1, 2]);
+  });
 });
