@@ -137,6 +137,8 @@ export const routeExpectations: Record<string, Row> = {
   'GET /api/concordance': row(PUBLIC, () => path('/api/concordance')),
   'PATCH /api/concordance': row(EDITORS, async (w) => ({ path: '/api/concordance', body: { term: (await w.record('approved')).term, language: 'de', toSize: 'tenor' } })),
   'GET /api/admin/outbox': row(ADMINS, () => path('/api/admin/outbox')),
+  'GET /api/admin/reindex': row(ADMINS, () => path('/api/admin/reindex')),
+  'POST /api/admin/reindex': row(ADMINS, () => ({ path: '/api/admin/reindex', body: {} })),
 
   'GET /oai': row(PUBLIC, () => path('/oai?verb=Identify')),
   'POST /oai': row(PUBLIC, () => ({ path: '/oai', body: { verb: 'Identify' } })),

@@ -4,7 +4,7 @@ import { PageHeader } from '@/components/page-header';
 const sections = [
   { to: '/admin/users', title: 'Users', text: 'Roles, deactivation and who has confirmed their e-mail address.', ready: true },
   { to: '/admin/outbox', title: 'Outbox', text: 'Mail that Windway has sent or captured, such as review notices and reset links.', ready: true },
-  { to: '/admin/reindex', title: 'Re-index', text: 'Rebuild the search index from the database and watch the search outbox.', ready: false },
+  { to: '/admin/reindex', title: 'Re-index', text: 'Rebuild the search index from the database while the archive keeps answering.', ready: true },
 ];
 
 export function Component() {

@@ -15,6 +15,8 @@ import { useUsers, type UserSortField } from '../api/get-users';
 import { useUpdateUser } from '../api/update-user';
 import { UserFilters } from '../components/user-filters';
 import { UsersTable } from '../components/users-table';
+import { InviteForm } from '../components/invite-form';
+import { Card } from '@/components/card';
 
 const perPage = 25;
 const sortFields: readonly UserSortField[] = ['displayName', 'email', 'role', 'createdAt'];
@@ -77,7 +79,10 @@ export function Component() {
 
   return (
     <>
-      <PageHeader eyebrow="Admin" title="Users" description="Change roles, and deactivate accounts that should no longer sign in." />
+      <PageHeader eyebrow="Admin" title="Users" description="Invite contributors and editors, change roles, and deactivate accounts that should no longer sign in." />
+      <Card className="mb-6">
+        <InviteForm />
+      </Card>
       <UserFilters q={q} role={role} onChange={(f) => setQuery({ q: f.q || undefined, role: f.role || undefined, page: undefined })} />
 
       <div aria-live="polite" className="mb-3 min-h-6 text-sm">
