@@ -44,6 +44,12 @@ await seedDemo({ reader: demoPassword, contributor: demoPassword, editor: demoPa
 const app = await startWindway({ migrate: false });
 
 try {
+  // Measure the steady state: the demo facsimiles' text extraction (background CPU work) finishes first.
+  const { Facsimile } = await import('../../server/models');
+  const { Op } = await import('sequelize');
+  for (let i = 0; i < 600 && (await Facsimile.count({ where: { extractionStatus: { [Op.in]: ['pending', 'running'] } } })) > 0; i += 1) {
+    await new Promise((r) => setTimeout(r, 500));
+  }
   // Wait until the outbox has indexed the demo excerpts, so searches hit real documents.
   const { drainOnce } = await import('../../search/outbox-worker');
   for (let i = 0; i < 50 && (await drainOnce()).synced > 0; i += 1);
