@@ -26,6 +26,7 @@ describe('POST /api/auth/register', () => {
     const client = await anonymous();
     const short = await client.post('/api/auth/register', { email: 'a@example.test', displayName: 'A', password: 'short' });
     expect(short.status).toBe(400);
+    // ASVS 2.1.1: passwords of at least 12 characters.
     expect(short.body.error.fields.password).toMatch(/at least 12/);
     // ASVS 2.1.7: passwords checked against a list of breached or common passwords.
     const common = await client.post('/api/auth/register', { email: 'b@example.test', displayName: 'B', password: 'password1234' });
