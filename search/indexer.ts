@@ -52,7 +52,7 @@ export async function reindexAll(options: ReindexOptions = {}): Promise<ReindexR
   if (!getSearchClient() || !MEILI_HOST) throw new Error('Search is not configured: set MEILI_HOST (and MEILI_KEY).');
   // Its own client: a batch keeps the service busy for seconds, longer than the app's 5 s request timeout.
   const client = options.client ?? new Meilisearch({ host: MEILI_HOST, apiKey: MEILI_KEY, timeout: 120_000 });
-  const batchSize = options.batchSize ?? 1000;
+  const batchSize = options.batchSize ?? 2000;
   const inFlight = Math.max(1, options.inFlight ?? 1);
   const started = performance.now();
   await ensureIndex(client);

@@ -4,7 +4,7 @@
  * first (so a failed task changes nothing), applies, then logs its op.
  */
 import { ApiError, indexNotFound } from './errors';
-import { SearchIndex, addSliced, emptyLike, rebuild, type Doc } from './index-store';
+import { SearchIndex, SLICE_MS, addSliced, emptyLike, rebuild, type Doc } from './index-store';
 import { applySettingsPatch, settingsView, validateSettingsPatch, type Settings } from './settings';
 import { TaskQueue } from './tasks';
 import { Store, type Op } from './persistence';
@@ -15,6 +15,16 @@ import { parseFilter } from './filter-parser';
 import { checkFilterable, evalFilter } from './filter-eval';
 
 const tick = () => new Promise<void>((r) => setImmediate(r));
+/** The log line of a documents op, serialised in time slices so a large batch does not stall searches. */
+async function docsOpLine(head: Record<string, unknown>, docs: Doc[]): Promise<string> {
+  const parts: string[] = [];
+  let t = performance.now();
+  for (let i = 0; i < docs.length; i++) {
+    parts.push(JSON.stringify(docs[i]));
+    if ((i & 15) === 15 && performance.now() - t > SLICE_MS) { await tick(); t = performance.now(); }
+  }
+  return `${JSON.stringify(head).slice(0, -1)},"docs":[${parts.join(',')}]}\n`;
+}
 const UID_RE = /^[A-Za-z0-9_-]{1,400}$/;
 
 export class Engine {
@@ -158,7 +168,10 @@ export class Engine {
       if (pk) target.primaryKey = pk;
       // Time-sliced (a few ms per slice), so searches keep answering while a large batch is indexed.
       await addSliced(target, docs, mode, tick);
-      if (docs.length) this.log(uid, { t: 'docs', task: task.uid, mode, pk, docs });
+      if (docs.length) {
+        this.lastTask.set(uid, task.uid);
+        if (this.store) this.store.appendLine(uid, await docsOpLine({ t: 'docs', task: task.uid, mode, pk }, docs));
+      }
       return { receivedDocuments: docs.length, indexedDocuments: docs.length };
     }, { indexedDocuments: 0 });
   }

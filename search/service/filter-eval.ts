@@ -34,7 +34,39 @@ function field(ix: SearchIndex, a: AttrRef): FacetField {
   return f;
 }
 
+/**
+ * Leaf results (`visibility = "public"` is in every app query; a multi-search
+ * repeats the same clauses) cached per index version; callers get a copy,
+ * since evaluation combines bitsets in place.
+ */
+const leafCache = new WeakMap<SearchIndex, { version: number; map: Map<string, Bitset> }>();
+
+function leafKey(n: FilterNode): string | null {
+  const q = (v: string) => JSON.stringify(v);
+  switch (n.t) {
+    case 'cmp': return `${q(n.attr.name)} ${n.op} ${q(n.v)}`;
+    case 'range': return `${q(n.attr.name)} ${q(n.lo)} TO ${q(n.hi)}`;
+    case 'in': return `${q(n.attr.name)} IN ${q(n.vs.join('\u0000'))}`;
+    case 'exists': case 'null': case 'empty': return `${q(n.attr.name)} ${n.t}`;
+    default: return null;
+  }
+}
+
 export function evalFilter(ix: SearchIndex, n: FilterNode): Bitset {
+  const key = leafKey(n);
+  if (key === null) return evalNode(ix, n);
+  let c = leafCache.get(ix);
+  if (!c || c.version !== ix.version) { c = { version: ix.version, map: new Map() }; leafCache.set(ix, c); }
+  let b = c.map.get(key);
+  if (!b) {
+    b = evalNode(ix, n);
+    if (c.map.size >= 256) c.map.clear();
+    c.map.set(key, b);
+  }
+  return b.clone();
+}
+
+function evalNode(ix: SearchIndex, n: FilterNode): Bitset {
   const size = ix.slots;
   switch (n.t) {
     case 'and': {

@@ -14,6 +14,13 @@ import { words } from './normalize';
 
 export type Doc = Record<string, unknown>;
 
+/** Which characters occur in a term (a–z one bit each, others hashed into 6 bits). */
+export function charMask(t: string): number {
+  let m = 0;
+  for (let i = 0; i < t.length; i++) { const c = t.charCodeAt(i) - 97; m |= 1 << (c >= 0 && c < 26 ? c : 26 + ((c + 97) % 6)); }
+  return m >>> 0;
+}
+
 /** Text of every scalar inside a value (objects and arrays flattened). */
 function textLeaves(v: unknown, out: string[]): void {
   if (v === null || v === undefined) return;
@@ -48,18 +55,21 @@ export class SearchIndex {
   private lastSlot = new Int32Array(1024).fill(-1);
   /** term ids bucketed by first character, for typo scans */
   readonly byFirst = new Map<number, number[]>();
+  /** per term: bitmask of its characters (charMask), a cheap typo pre-filter */
+  termMask = new Uint32Array(1024);
   docLen = new Uint32Array(1024);
   totalLen = 0;
   /** per-slot token streams (phrase verification) */
   readonly tokens = new TokenStore();
   private tokBuf = new Int32Array(4096);
-  private sortedIds: Int32Array | null = null;
 
   readonly facets = new Map<string, FacetField>();
   readonly sorts = new Map<string, SortField>();
 
   /** bumped on every write; caches key on it */
   version = 0;
+  /** bumped when settings-derived lookups change (query expansion caches key on it) */
+  settingsVersion = 0;
   /** derived from settings */
   stopSet = new Set<string>();
   synonyms = new Map<string, string[][]>();
@@ -84,6 +94,7 @@ export class SearchIndex {
     for (const f of s.filterableAttributes) if (!f.includes('*')) this.facet(f);
     for (const f of s.sortableAttributes) if (!this.sorts.has(f)) this.sorts.set(f, this.fillField(new SortField(f)));
     this.version++;
+    this.settingsVersion++;
   }
 
   private fillField<T extends { add(slot: number, doc: unknown): void }>(f: T): T {
@@ -134,22 +145,12 @@ export class SearchIndex {
     this.terms.push(t);
     this.postings.push(new Posting());
     this.lastSlot = growI32(this.lastSlot, id + 1);
+    this.termMask = growU32(this.termMask, id + 1);
+    this.termMask[id] = charMask(t);
     const c = t.charCodeAt(0);
     const b = this.byFirst.get(c);
     if (b) b.push(id); else this.byFirst.set(c, [id]);
-    this.sortedIds = null;
     return id;
-  }
-
-  /** Term ids sorted by term, for prefix ranges. */
-  sortedTerms(): Int32Array {
-    if (!this.sortedIds) {
-      const ids = Int32Array.from(this.terms.keys());
-      const t = this.terms;
-      ids.sort((a, b) => (t[a] < t[b] ? -1 : t[a] > t[b] ? 1 : 0));
-      this.sortedIds = ids;
-    }
-    return this.sortedIds;
   }
 
   /** Searchable text of a document as [attribute rank, strings] pairs. */

@@ -44,9 +44,15 @@ export interface Token {
 /** Splits text into word tokens with their original offsets. */
 export function tokenize(text: string): Token[] {
   const out: Token[] = [];
+  // Lower-case once; per token only non-ASCII words need folding (unless lower-casing changed lengths).
+  const lower = text.toLowerCase();
+  const same = lower.length === text.length;
   WORD.lastIndex = 0;
   for (let m = WORD.exec(text); m; m = WORD.exec(text)) {
-    out.push({ norm: fold(m[0]), start: m.index, end: m.index + m[0].length });
+    const end = m.index + m[0].length;
+    let norm: string;
+    if (same) { norm = lower.slice(m.index, end); if (NON_ASCII.test(norm)) norm = fold(norm); } else norm = fold(m[0]);
+    out.push({ norm, start: m.index, end });
   }
   return out;
 }

@@ -44,8 +44,10 @@ export class Store {
     writeAtomic(path.join(this.dir, 'tasks.json'), JSON.stringify(state));
   }
 
-  appendOp(uid: string, op: Op): void {
-    const line = JSON.stringify(op) + '\n';
+  appendOp(uid: string, op: Op): void { this.appendLine(uid, JSON.stringify(op) + '\n'); }
+
+  /** Appends one already-serialised op line (see Engine: large batches are serialised in slices). */
+  appendLine(uid: string, line: string): void {
     fs.mkdirSync(this.idir(uid), { recursive: true });
     fs.appendFileSync(path.join(this.idir(uid), 'ops.jsonl'), line);
     this.logBytes.set(uid, (this.logBytes.get(uid) ?? 0) + Buffer.byteLength(line));
@@ -70,9 +72,10 @@ export class Store {
       const meta: Meta = { uid: ix.uid, primaryKey: ix.primaryKey, createdAt: ix.createdAt, updatedAt: ix.updatedAt, settings: ix.settings, lastTask };
       bytes += fs.writeSync(fd, JSON.stringify(meta) + '\n');
       const slots = ix.liveSlots();
-      for (let i = 0; i < slots.length; i += 2000) {
+      // Small chunks: each is serialised synchronously, and searches wait for it.
+      for (let i = 0; i < slots.length; i += 500) {
         let chunk = '';
-        for (let j = i; j < Math.min(i + 2000, slots.length); j++) chunk += JSON.stringify(ix.docs[slots[j]]) + '\n';
+        for (let j = i; j < Math.min(i + 500, slots.length); j++) chunk += JSON.stringify(ix.docs[slots[j]]) + '\n';
         bytes += fs.writeSync(fd, chunk);
         if (yieldBetween) await tick();
       }

@@ -114,16 +114,16 @@ function seek(p: Posting, i: number, s: number): number {
 
 /** Lowest attribute rank (≤ 15) where the term ids occur consecutively in one text of the stream, or -1. */
 function phraseIn(v: Int32Array, T: Int32Array, searchMask: number): number {
-  const L = T.length, t0 = T[0];
-  let rank = 0, best = -1;
-  for (let i = 0, end = v.length - L; i <= end; i++) {
-    const x = v[i];
-    if (x < 0) { rank = -x - 1; continue; }
-    if (x !== t0) continue;
+  const L = T.length, t0 = T[0], last = v.length - L;
+  let best = -1;
+  // Native indexOf finds the first word's occurrences; the attribute is read back from the text's separator.
+  for (let i = v.indexOf(t0); i >= 0 && i <= last; i = v.indexOf(t0, i + 1)) {
     let k = 1;
     while (k < L && v[i + k] === T[k]) k++;
     if (k < L) continue;
-    const r = Math.min(rank, 15);
+    let j = i - 1;
+    while (j > 0 && v[j] >= 0) j--;
+    const r = Math.min(-v[j] - 1, 15);
     if (((1 << r) & searchMask) !== 0 && (best < 0 || r < best)) { best = r; if (r === 0) break; }
   }
   return best;

@@ -81,6 +81,10 @@ await probing;
 const pr = percentiles(probe, []);
 console.log(`indexed ${SIZE} docs in ${(indexMs / 1000).toFixed(1)} s (${Math.round(SIZE / (indexMs / 1000))} docs/s, batch ${BATCH}); probe search during indexing p50 ${pr.p50.toFixed(1)} / p95 ${pr.p95.toFixed(1)} / max ${Math.max(...probe).toFixed(0)} ms; rss ${Math.round(process.memoryUsage().rss / 2 ** 20)} MB`);
 
+// PROFILE=file.cpuprofile: a CPU profile of the query phase only (open it in Chrome DevTools).
+const { Session } = await import('node:inspector/promises');
+const session = process.env.PROFILE ? new Session() : null;
+if (session) { session.connect(); await session.post('Profiler.enable'); await session.post('Profiler.start'); }
 const queries = makeQueries(corpus, 200);
 for (const kind of KINDS) {
   const ms: number[] = [];
@@ -95,5 +99,9 @@ for (const kind of KINDS) {
   console.log(`${kind.padEnd(22)} p50 ${l.p50.toFixed(1).padStart(6)}  p95 ${l.p95.toFixed(1).padStart(6)}  p99 ${l.p99.toFixed(1).padStart(6)}  mean hits ${Math.round(l.meanHits)}`);
 }
 console.log(`rss ${Math.round(process.memoryUsage().rss / 2 ** 20)} MB`);
+if (session) {
+  const { profile } = await session.post('Profiler.stop');
+  (await import('node:fs')).writeFileSync(process.env.PROFILE!, JSON.stringify(profile));
+}
 await svc.close();
 process.exit(0);
