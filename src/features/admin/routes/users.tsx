@@ -1,5 +1,4 @@
 import { useCallback, useState } from 'react';
-import { useSearchParams } from 'react-router-dom';
 import type { SortingState, Updater } from '@tanstack/react-table';
 import { roles, type PublicUser, type Role, type UpdateUserInput } from '@shared/schemas/auth';
 import { Alert } from '@/components/alert';
@@ -9,6 +8,7 @@ import { PageHeader } from '@/components/page-header';
 import { Pagination } from '@/components/pagination';
 import { PageSpinner } from '@/components/spinner';
 import { useSession } from '@/features/auth/api/get-session';
+import { useQueryParams } from '@/lib/use-query-params';
 import { errorMessage } from '@/lib/api';
 import { roleLabels } from '@/lib/roles';
 import { useUsers, type UserSortField } from '../api/get-users';
@@ -39,7 +39,7 @@ function describeChange(user: PublicUser, changes: UpdateUserInput): string {
 }
 
 export function Component() {
-  const [params, setParams] = useSearchParams();
+  const [params, setQuery] = useQueryParams();
   const page = Math.max(1, Number.parseInt(params.get('page') ?? '1', 10) || 1);
   const sorting = parseSort(params.get('sort'));
   const q = params.get('q') ?? '';
@@ -50,19 +50,6 @@ export function Component() {
   const users = useUsers({ page, perPage, sort: formatSort(sorting), q: q || undefined, role: role || undefined });
   const update = useUpdateUser();
   const [notice, setNotice] = useState('');
-
-  const setQuery = useCallback(
-    (changes: Record<string, string | undefined>) =>
-      setParams((previous) => {
-        const next = new URLSearchParams(previous);
-        for (const [key, value] of Object.entries(changes)) {
-          if (value) next.set(key, value);
-          else next.delete(key);
-        }
-        return next;
-      }),
-    [setParams],
-  );
 
   const onSortingChange = (updater: Updater<SortingState>) => {
     const next = typeof updater === 'function' ? updater(sorting) : updater;

@@ -1,5 +1,4 @@
-import { useCallback } from 'react';
-import { Link, useSearchParams } from 'react-router-dom';
+import { Link } from 'react-router-dom';
 import type { SortingState, Updater } from '@tanstack/react-table';
 import { sourceTypes, workflowStates, type SourceType, type WorkflowState } from '@shared/catalogue/vocabulary';
 import { Alert } from '@/components/alert';
@@ -9,6 +8,7 @@ import { PageHeader } from '@/components/page-header';
 import { Pagination } from '@/components/pagination';
 import { PageSpinner } from '@/components/spinner';
 import { hasRole, useSession } from '@/features/auth/api/get-session';
+import { useQueryParams } from '@/lib/use-query-params';
 import { errorMessage } from '@/lib/api';
 import { contributorRoles } from '@/lib/roles';
 import { sourceSortFields, useSources } from '../api/get-sources';
@@ -36,7 +36,7 @@ function oneOf<T extends string>(list: readonly T[], value: string | null): T | 
 
 /** /sources: every source the visitor may see, filtered and sorted on the server; all state lives in the URL. */
 export function Component() {
-  const [params, setParams] = useSearchParams();
+  const [params, setQuery] = useQueryParams();
   const session = useSession();
   const contributor = hasRole(session.role, contributorRoles);
 
@@ -65,19 +65,6 @@ export function Component() {
     lang: filters.lang || undefined,
     mine: filters.mine || undefined,
   });
-
-  const setQuery = useCallback(
-    (changes: Record<string, string | undefined>) =>
-      setParams((previous) => {
-        const next = new URLSearchParams(previous);
-        for (const [key, value] of Object.entries(changes)) {
-          if (value) next.set(key, value);
-          else next.delete(key);
-        }
-        return next;
-      }),
-    [setParams],
-  );
 
   const onSortingChange = (updater: Updater<SortingState>) => {
     const next = typeof updater === 'function' ? updater(sorting) : updater;
@@ -130,7 +117,7 @@ export function Component() {
           title={filtered ? 'No sources match these filters' : 'No sources yet'}
           action={
             filtered ? (
-              <Button variant="secondary" onClick={() => setParams(new URLSearchParams())}>
+              <Button variant="secondary" onClick={() => setQuery(Object.fromEntries([...params.keys()].map((key) => [key, undefined])))}>
                 Clear all filters
               </Button>
             ) : contributor ? (
