@@ -1,4 +1,4 @@
-import { useEffect, useRef, useState } from 'react';
+import { useState } from 'react';
 import { FormProvider, useForm, type Path } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useQueryClient } from '@tanstack/react-query';
@@ -11,7 +11,7 @@ import { DraftPrompt } from '@/features/contribute/components/draft-prompt';
 import { ErrorSummary } from '@/features/contribute/components/error-summary';
 import { SaveBar } from '@/features/contribute/components/save-bar';
 import { flattenErrors } from '@/features/contribute/lib/flatten-errors';
-import { mergeChanges } from '@/features/contribute/lib/merge-changes';
+import { useEditConflict } from '@/features/contribute/lib/use-edit-conflict';
 import { useFormDraft } from '@/features/contribute/lib/use-form-draft';
 import { errorMessage, isApiError } from '@/lib/api';
 import { useCreateExcerpt } from '../../api/create-excerpt';
@@ -47,25 +47,21 @@ export function ExcerptForm({ source, excerpt, currentPage, onSaved, onCancel }:
     resolver: zodResolver(createExcerptSchema),
     defaultValues: excerpt ? excerptToFormValues(excerpt) : emptyExcerptValues(),
   });
-  const [version, setVersion] = useState<number | null>(excerpt?.version ?? null);
-  const base = useRef<ExcerptFormValues | null>(excerpt ? excerptToFormValues(excerpt) : null);
+  const { version, conflict, conflictRef, reapplying, reapply: reapplyOnLatest, markConflict, clearConflict } = useEditConflict<ExcerptFormValues>(
+    form,
+    { version: excerpt?.version ?? null, values: excerpt ? excerptToFormValues(excerpt) : null },
+    excerptFieldLabels,
+  );
   const draft = useFormDraft(form, excerpt ? `excerpt:${excerpt.id}` : `excerpt:new:${source.id}`, { baseVersion: version });
   const create = useCreateExcerpt();
   const update = useUpdateExcerpt();
   const [reason, setReason] = useState('');
   const [attempt, setAttempt] = useState(0);
   const [serverError, setServerError] = useState<unknown>(null);
-  const [conflict, setConflict] = useState<{ reappliedVersion: number | null; overlapping: string[] } | null>(null);
-  const [reapplying, setReapplying] = useState(false);
-  const conflictRef = useRef<HTMLDivElement>(null);
-
-  useEffect(() => {
-    if (conflict && conflict.reappliedVersion === null) conflictRef.current?.focus();
-  }, [conflict]);
 
   const onError = (error: unknown) => {
     if (isApiError(error) && error.code === 'conflict') {
-      setConflict({ reappliedVersion: null, overlapping: [] });
+      markConflict();
       return;
     }
     if (isApiError(error) && error.fields) {
@@ -80,7 +76,7 @@ export function ExcerptForm({ source, excerpt, currentPage, onSaved, onCancel }:
     const done = {
       onSuccess: (result: { data: ExcerptDetail }) => {
         draft.clear();
-        setConflict(null);
+        clearConflict();
         onSaved(result.data);
       },
       onError,
@@ -90,21 +86,15 @@ export function ExcerptForm({ source, excerpt, currentPage, onSaved, onCancel }:
   };
 
   const reapply = async () => {
-    if (!excerpt || !base.current) return;
-    setReapplying(true);
+    if (!excerpt) return;
     try {
-      const latest = await queryClient.fetchQuery({ ...getExcerptQueryOptions(excerpt.id), staleTime: 0 });
-      const latestValues = excerptToFormValues(latest.data);
-      const merged = mergeChanges(base.current, form.getValues(), latestValues);
-      base.current = latestValues;
-      setVersion(latest.data.version);
-      form.reset(merged.values, { keepDefaultValues: true });
-      setConflict({ reappliedVersion: latest.data.version, overlapping: merged.overlapping.map((k) => excerptFieldLabels[k] ?? k) });
+      await reapplyOnLatest(async () => {
+        const latest = await queryClient.fetchQuery({ ...getExcerptQueryOptions(excerpt.id), staleTime: 0 });
+        return { version: latest.data.version, values: excerptToFormValues(latest.data) };
+      });
     } catch (error) {
       setServerError(error);
       setAttempt((n) => n + 1);
-    } finally {
-      setReapplying(false);
     }
   };
 

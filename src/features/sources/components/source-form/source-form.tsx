@@ -1,4 +1,4 @@
-import { useEffect, useRef, useState } from 'react';
+import { useState } from 'react';
 import { FormProvider, useForm, useWatch, type Path } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useQueryClient } from '@tanstack/react-query';
@@ -11,7 +11,7 @@ import { DraftPrompt } from '@/features/contribute/components/draft-prompt';
 import { ErrorSummary } from '@/features/contribute/components/error-summary';
 import { SaveBar } from '@/features/contribute/components/save-bar';
 import { flattenErrors } from '@/features/contribute/lib/flatten-errors';
-import { mergeChanges } from '@/features/contribute/lib/merge-changes';
+import { useEditConflict } from '@/features/contribute/lib/use-edit-conflict';
 import { useFormDraft } from '@/features/contribute/lib/use-form-draft';
 import { errorMessage, isApiError } from '@/lib/api';
 import { useCreateSource } from '../../api/create-source';
@@ -40,11 +40,6 @@ export interface SourceFormProps {
   onCancel?: () => void;
 }
 
-interface ConflictState {
-  reappliedVersion: number | null;
-  overlapping: string[];
-}
-
 /** Catalogue a source, or edit one: shared schema, inline messages, a draft kept in the browser, safe on conflicts. */
 export function SourceForm({ source, onSaved, onCancel }: SourceFormProps) {
   const queryClient = useQueryClient();
@@ -52,26 +47,22 @@ export function SourceForm({ source, onSaved, onCancel }: SourceFormProps) {
     resolver: zodResolver(createSourceSchema),
     defaultValues: source ? sourceToFormValues(source) : emptySourceValues(),
   });
-  const [version, setVersion] = useState<number | null>(source?.version ?? null);
-  const base = useRef<SourceFormValues | null>(source ? sourceToFormValues(source) : null);
+  const { version, conflict, conflictRef, reapplying, reapply: reapplyOnLatest, markConflict, clearConflict } = useEditConflict<SourceFormValues>(
+    form,
+    { version: source?.version ?? null, values: source ? sourceToFormValues(source) : null },
+    sourceFieldLabels,
+  );
   const draft = useFormDraft(form, source ? `source:${source.id}` : 'source:new', { baseVersion: version });
   const create = useCreateSource();
   const update = useUpdateSource();
   const [reason, setReason] = useState('');
   const [attempt, setAttempt] = useState(0);
   const [serverError, setServerError] = useState<unknown>(null);
-  const [conflict, setConflict] = useState<ConflictState | null>(null);
-  const [reapplying, setReapplying] = useState(false);
-  const conflictRef = useRef<HTMLDivElement>(null);
   const sourceType = useWatch({ control: form.control, name: 'sourceType' });
-
-  useEffect(() => {
-    if (conflict && conflict.reappliedVersion === null) conflictRef.current?.focus();
-  }, [conflict]);
 
   const onError = (error: unknown) => {
     if (isApiError(error) && error.code === 'conflict') {
-      setConflict({ reappliedVersion: null, overlapping: [] });
+      markConflict();
       return;
     }
     if (isApiError(error) && error.fields) {
@@ -89,7 +80,7 @@ export function SourceForm({ source, onSaved, onCancel }: SourceFormProps) {
     const done = {
       onSuccess: (result: { data: SourceDetail }) => {
         draft.clear();
-        setConflict(null);
+        clearConflict();
         onSaved(result.data);
       },
       onError,
@@ -102,21 +93,15 @@ export function SourceForm({ source, onSaved, onCancel }: SourceFormProps) {
   };
 
   const reapply = async () => {
-    if (!source || !base.current) return;
-    setReapplying(true);
+    if (!source) return;
     try {
-      const latest = await queryClient.fetchQuery({ ...getSourceQueryOptions(source.id), staleTime: 0 });
-      const latestValues = sourceToFormValues(latest.data);
-      const merged = mergeChanges(base.current, form.getValues(), latestValues);
-      base.current = latestValues;
-      setVersion(latest.data.version);
-      form.reset(merged.values, { keepDefaultValues: true });
-      setConflict({ reappliedVersion: latest.data.version, overlapping: merged.overlapping.map((k) => sourceFieldLabels[k] ?? k) });
+      await reapplyOnLatest(async () => {
+        const latest = await queryClient.fetchQuery({ ...getSourceQueryOptions(source.id), staleTime: 0 });
+        return { version: latest.data.version, values: sourceToFormValues(latest.data) };
+      });
     } catch (error) {
       setServerError(error);
       setAttempt((n) => n + 1);
-    } finally {
-      setReapplying(false);
     }
   };
 
