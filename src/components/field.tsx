@@ -28,3 +28,30 @@ export function FieldError({ id, message }: { id?: string; message?: string }) {
     </p>
   );
 }
+
+interface LabelledFieldProps {
+  inputId: string;
+  label: ReactNode;
+  labelSuffix?: ReactNode;
+  hintId?: string;
+  hint?: ReactNode;
+  errorId?: string;
+  error?: string;
+  className?: string;
+  children: ReactNode;
+}
+
+/** The visible label, hint and error around any control (text input, textarea…). */
+export function LabelledField({ inputId, label, labelSuffix, hintId, hint, errorId, error, className, children }: LabelledFieldProps) {
+  return (
+    <div className={className}>
+      <label htmlFor={inputId} className="block text-sm font-medium text-ink">
+        {label}
+        {labelSuffix && <span className="ml-1 font-normal text-ink-muted">{labelSuffix}</span>}
+      </label>
+      <FieldHint id={hintId}>{hint}</FieldHint>
+      {children}
+      <FieldError id={errorId} message={error} />
+    </div>
+  );
+}

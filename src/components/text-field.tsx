@@ -1,6 +1,6 @@
 import { useId, type InputHTMLAttributes, type ReactNode, type Ref } from 'react';
 import { cn } from '@/lib/cn';
-import { FieldError, FieldHint, fieldIds } from './field';
+import { LabelledField, fieldIds } from './field';
 
 export interface TextFieldProps extends Omit<InputHTMLAttributes<HTMLInputElement>, 'children'> {
   /** Always visible above the input. */
@@ -28,12 +28,7 @@ export function TextField({
   const inputId = id ?? generated;
   const { hintId, errorId, describedBy } = fieldIds(inputId, hint, error);
   return (
-    <div className={containerClassName}>
-      <label htmlFor={inputId} className="block text-sm font-medium text-ink">
-        {label}
-        {labelSuffix && <span className="ml-1 font-normal text-ink-muted">{labelSuffix}</span>}
-      </label>
-      <FieldHint id={hintId}>{hint}</FieldHint>
+    <LabelledField inputId={inputId} label={label} labelSuffix={labelSuffix} hint={hint} hintId={hintId} error={error} errorId={errorId} className={containerClassName}>
       <input
         id={inputId}
         type={type}
@@ -42,7 +37,6 @@ export function TextField({
         className={cn('field-control mt-1', error && 'border-danger', className)}
         {...rest}
       />
-      <FieldError id={errorId} message={error} />
-    </div>
+    </LabelledField>
   );
 }

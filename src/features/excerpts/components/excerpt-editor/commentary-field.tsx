@@ -1,7 +1,7 @@
 import { useId, useState } from 'react';
 import { useFormContext, useWatch } from 'react-hook-form';
 import { FormSection } from '@/features/contribute/components/form-section';
-import { TextareaField } from '@/features/contribute/components/textarea-field';
+import { TextareaField } from '@/components/textarea-field';
 import { fieldDomId } from '@/features/contribute/lib/flatten-errors';
 import { cn } from '@/lib/cn';
 import { excerptFieldLabels as labels, excerptFormId, type ExcerptFormValues } from './values';

@@ -6,7 +6,7 @@ import { FieldError } from '@/components/field';
 import { Select } from '@/components/select';
 import { TextField } from '@/components/text-field';
 import { FormSection } from '@/features/contribute/components/form-section';
-import { TextareaField } from '@/features/contribute/components/textarea-field';
+import { TextareaField } from '@/components/textarea-field';
 import { fieldDomId } from '@/features/contribute/lib/flatten-errors';
 import { cn } from '@/lib/cn';
 import { PitchReading } from '../pitch-reading';

@@ -1,7 +1,7 @@
 import { useFormContext } from 'react-hook-form';
 import { TextField } from '@/components/text-field';
 import { FormSection } from '@/features/contribute/components/form-section';
-import { TextareaField } from '@/features/contribute/components/textarea-field';
+import { TextareaField } from '@/components/textarea-field';
 import { fieldDomId } from '@/features/contribute/lib/flatten-errors';
 import { emptyToNull, excerptFieldLabels as labels, excerptFormId, type ExcerptFormValues } from './values';
 

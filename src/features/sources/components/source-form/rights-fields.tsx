@@ -2,7 +2,7 @@ import { useFormContext } from 'react-hook-form';
 import { facsimileAccessLevels, type FacsimileAccess } from '@shared/catalogue/vocabulary';
 import { Select } from '@/components/select';
 import { FormSection } from '@/features/contribute/components/form-section';
-import { TextareaField } from '@/features/contribute/components/textarea-field';
+import { TextareaField } from '@/components/textarea-field';
 import { fieldDomId } from '@/features/contribute/lib/flatten-errors';
 import { sourceFieldLabels as labels, sourceFormId, type SourceFormValues } from './values';
 

@@ -1,5 +1,5 @@
 import { useId, type ReactNode, type Ref, type TextareaHTMLAttributes } from 'react';
-import { FieldError, FieldHint, fieldIds } from '@/components/field';
+import { LabelledField, fieldIds } from '@/components/field';
 import { cn } from '@/lib/cn';
 
 export interface TextareaFieldProps extends TextareaHTMLAttributes<HTMLTextAreaElement> {
@@ -29,12 +29,7 @@ export function TextareaField({
   const inputId = id ?? generated;
   const { hintId, errorId, describedBy } = fieldIds(inputId, hint, error);
   return (
-    <div className={containerClassName}>
-      <label htmlFor={inputId} className="block text-sm font-medium text-ink">
-        {label}
-        {labelSuffix && <span className="ml-1 font-normal text-ink-muted">{labelSuffix}</span>}
-      </label>
-      <FieldHint id={hintId}>{hint}</FieldHint>
+    <LabelledField inputId={inputId} label={label} labelSuffix={labelSuffix} hint={hint} hintId={hintId} error={error} errorId={errorId} className={containerClassName}>
       <textarea
         id={inputId}
         rows={rows}
@@ -43,7 +38,6 @@ export function TextareaField({
         className={cn('field-control mt-1', serif && 'font-serif text-[1.1875rem] leading-[1.8]', error && 'border-danger', className)}
         {...rest}
       />
-      <FieldError id={errorId} message={error} />
-    </div>
+    </LabelledField>
   );
 }
