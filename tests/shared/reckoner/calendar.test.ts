@@ -5,16 +5,7 @@ import {
   julianDayNumber, julianGregorianDifference, julianToGregorian, modernYearFromLadyDay, parseDualDate,
   type CalendarName,
 } from '@shared/reckoner';
-
-function errorOf(call: () => unknown): ReckonerError {
-  try {
-    call();
-  } catch (error) {
-    if (error instanceof ReckonerError) return error;
-    throw error;
-  }
-  throw new Error('expected a ReckonerError');
-}
+import { errorOf } from './support';
 
 describe('julianDate (Meeus ch. 7)', () => {
   it('computes Meeus’s worked examples', () => {

@@ -1,16 +1,7 @@
 import { describe, it, expect } from 'vitest';
 import edtf from 'edtf';
 import { OPEN_END_CEILING, OPEN_START_FLOOR, QUALIFIED_DATE_MARGIN, ReckonerError, describeEdtf, reckonDate } from '@shared/reckoner';
-
-function errorOf(call: () => unknown): ReckonerError {
-  try {
-    call();
-  } catch (error) {
-    if (error instanceof ReckonerError) return error;
-    throw error;
-  }
-  throw new Error('expected a ReckonerError');
-}
+import { errorOf } from './support';
 
 const isoDay = (ms: number) => new Date(ms).toISOString().slice(0, 10);
 

@@ -4,16 +4,7 @@ import {
   INSTRUMENT_SIZES, ReckonerError, fingeringKey, fingeringSignatureShift, formatKey, keyFromSignature, keySignature,
   overviewForPiece, parseFingering, parseKey, soundingKeyFor, tonicPitchClass, type Mode,
 } from '@shared/reckoner';
-
-function errorOf(call: () => unknown): ReckonerError {
-  try {
-    call();
-  } catch (error) {
-    if (error instanceof ReckonerError) return error;
-    throw error;
-  }
-  throw new Error('expected a ReckonerError');
-}
+import { errorOf } from './support';
 
 describe('parseKey', () => {
   it('reads the ways keys are written', () => {

@@ -1,17 +1,7 @@
 import { describe, it, expect } from 'vitest';
 import { Note } from 'tonal';
 import { ReckonerError, midiToNote, noteToMidi, parseNote, pitchClassName, spellingAtFifths, fifthsOf } from '@shared/reckoner';
-
-/** The ReckonerError a call throws; fails the test when it throws nothing or something else. */
-function errorOf(call: () => unknown): ReckonerError {
-  try {
-    call();
-  } catch (error) {
-    if (error instanceof ReckonerError) return error;
-    throw error;
-  }
-  throw new Error('expected a ReckonerError');
-}
+import { errorOf } from './support';
 
 describe('parseNote', () => {
   it('reads scientific pitch notation with ASCII and Unicode accidentals', () => {

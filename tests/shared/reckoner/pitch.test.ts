@@ -5,17 +5,7 @@ import {
   MODERN_A4_HZ, PITCH_STANDARDS, ReckonerError, centsBetween, centsFromModern, midiToNote, nearestNote,
   nearestPitchStandard, noteFrequency, roundTo, validateA4,
 } from '@shared/reckoner';
-
-/** The ReckonerError a call throws; fails the test when it throws nothing or something else. */
-function errorOf(call: () => unknown): ReckonerError {
-  try {
-    call();
-  } catch (error) {
-    if (error instanceof ReckonerError) return error;
-    throw error;
-  }
-  throw new Error('expected a ReckonerError');
-}
+import { errorOf } from './support';
 
 describe('noteFrequency', () => {
   it('puts a′ at 440 Hz by default', () => {

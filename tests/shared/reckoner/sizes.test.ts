@@ -1,19 +1,10 @@
 import { describe, it, expect } from 'vitest';
 import { Interval } from 'tonal';
 import {
-  HS_RECORDER, INSTRUMENT_SIZES, ReckonerError, SIZE_SLUGS, checkRange, findSizeByName, getSize, intervalBetweenSizes,
+  HS_RECORDER, INSTRUMENT_SIZES, SIZE_SLUGS, checkRange, findSizeByName, getSize, intervalBetweenSizes,
   noteToMidi, reckonSounding, resolveSizeDescription, soundingLowest,
 } from '@shared/reckoner';
-
-function errorOf(call: () => unknown): ReckonerError {
-  try {
-    call();
-  } catch (error) {
-    if (error instanceof ReckonerError) return error;
-    throw error;
-  }
-  throw new Error('expected a ReckonerError');
-}
+import { errorOf } from './support';
 
 describe('instrument size vocabulary', () => {
   it('has the contract slugs', () => {
