@@ -1,7 +1,7 @@
 import { createServer, type Server } from 'node:http';
 import { getConfig, resetConfigCache } from './config';
 import { createApp } from './app';
-import { closeSequelize, getSequelize } from './db';
+import { closeSequelize, getSequelize, waitForIdleDatabase } from './db';
 import { migrateToLatest } from './migrator';
 import { startBackgroundWork } from './background';
 
@@ -32,9 +32,16 @@ export async function startWindway(options: { migrate?: boolean } = {}): Promise
     url: `http://${config.HOST}:${port}`,
     server,
     async close() {
-      await stopBackground();
+      // Requests in flight finish before the database goes (for a few seconds at most),
+      // rather than fail against a closed pool.
+      const closed = new Promise<void>((resolve) => server.close(() => resolve()));
+      server.closeIdleConnections();
+      const grace = new Promise<void>((resolve) => setTimeout(resolve, 5_000).unref());
+      await Promise.race([closed, grace]);
       server.closeAllConnections();
-      await new Promise<void>((resolve) => server.close(() => resolve()));
+      await closed;
+      await stopBackground();
+      await waitForIdleDatabase();
       await closeSequelize();
     },
   };

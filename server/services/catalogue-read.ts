@@ -11,8 +11,9 @@ import { sourcePolicy } from '../policies/source';
 import { excerptPolicy } from '../policies/excerpt';
 import type { SizeNames } from '../presenters/excerpt';
 
-const credit = { model: User, as: 'contributor', attributes: ['id', 'displayName'] };
-const tags = [
+// Include options are built afresh for every query: Sequelize writes into the objects it is given.
+const credit = () => ({ model: User, as: 'contributor', attributes: ['id', 'displayName'] });
+const tags = () => [
   { model: InstrumentMention, as: 'mentions' },
   { model: PitchTag, as: 'pitchTags' },
 ];
@@ -67,14 +68,14 @@ export async function sourceViewsFor(actor: Actor, rows: Source[]): Promise<Sour
 
 /** The source as this person may see it, or 404 (drafts are invisible rather than forbidden). */
 export async function findSourceFor(actor: Actor, publicId: string): Promise<SourceView> {
-  const current = await Source.findOne({ where: { publicId }, include: [credit] });
+  const current = await Source.findOne({ where: { publicId }, include: [credit()] });
   if (!current || !sourcePolicy.read(actor, current)) throw notFound('The source');
   return (await sourceViewsFor(actor, [current]))[0];
 }
 
 /** The excerpts of a source this person may see, in catalogue order, with mentions and pitch tags. */
 export async function excerptsFor(actor: Actor, source: Source): Promise<Excerpt[]> {
-  const rows = await Excerpt.findAll({ where: { sourceId: source.id }, include: tags, order: [['id', 'ASC']] });
+  const rows = await Excerpt.findAll({ where: { sourceId: source.id }, include: tags(), order: [['id', 'ASC']] });
   const visible = rows.filter((e) => excerptPolicy.read(actor, e, source));
   const needSnapshot = visible.filter((e) => e.status !== 'approved' && !excerptPolicy.readCurrent(actor, e, source));
   const snapshots = await approvedSnapshots('excerpt', needSnapshot);
@@ -93,8 +94,9 @@ export interface ExcerptView {
 }
 
 export async function findExcerptFor(actor: Actor, publicId: string): Promise<ExcerptView> {
-  const current = await Excerpt.findOne({ where: { publicId }, include: [...tags, credit] });
-  const source = current ? await Source.findByPk(current.sourceId, { include: [credit] }) : null;
+  // One query for the excerpt, its tags, its source and both credits (an excerpt page is the most read page).
+  const current = await Excerpt.findOne({ where: { publicId }, include: [...tags(), credit(), { model: Source, as: 'source', include: [credit()] }] });
+  const source = current?.source ?? null;
   if (!current || !source || !excerptPolicy.read(actor, current, source)) throw notFound('The excerpt');
   const [sourceView] = await sourceViewsFor(actor, [source]);
   if (current.status === 'approved' || excerptPolicy.readCurrent(actor, current, source)) {
@@ -106,7 +108,8 @@ export async function findExcerptFor(actor: Actor, publicId: string): Promise<Ex
 }
 
 export async function sizeNames(): Promise<SizeNames> {
-  const rows = await InstrumentSizeRecord.findAll({ attributes: ['slug', 'name'] });
+  // Plain rows: building model instances would cost more than the query for this lookup table.
+  const rows = await InstrumentSizeRecord.findAll({ attributes: ['slug', 'name'], raw: true });
   return new Map(rows.map((r) => [r.slug, r.name]));
 }
 

@@ -8,7 +8,8 @@ import { Op } from 'sequelize';
 import { Facsimile } from '../models';
 import { getConfig } from '../config';
 import { getFileStore } from '../storage/file-store';
-import { extractFacsimileText, loadPdfWorker } from './text-extraction';
+import { extractFacsimileText } from './text-extraction';
+import { stopPdfReader, warmUpPdfReader } from '../pdf/reader';
 
 /** A 'running' claim not touched for this long belongs to a process that died. */
 const STALE_CLAIM_MS = 10 * 60 * 1000;
@@ -109,11 +110,12 @@ export function startFacsimileWork(options: { pollMs?: number; sweepEveryMs?: nu
     }
   };
   timer = setTimeout(() => (running = tick()), pollMs);
-  loadPdfWorker().catch((error) => console.error('[facsimiles] could not load the PDF reader', error));
+  warmUpPdfReader().catch((error) => console.error('[facsimiles] could not load the PDF reader', error));
 
   return async () => {
     stopped = true;
     clearTimeout(timer);
     await running;
+    await stopPdfReader();
   };
 }

@@ -10,7 +10,7 @@ import { getSequelize } from '../db';
 import { Facsimile, type Source } from '../models';
 import { HttpError, unsupportedMediaType } from '../errors';
 import { contentKey, getFileStore } from '../storage/file-store';
-import { countPdfPages } from './text-extraction';
+import { countPdfPages } from '../pdf/reader';
 
 export const acceptedMediaTypes: Record<string, string> = {
   'application/pdf': 'PDF',

@@ -10,7 +10,7 @@ import {
 } from '@shared/citations/api';
 import { validate } from '../../http/validate';
 import { invalid } from '../../errors';
-import { findCitables, formatCitations, listStyles, loadCitable, registerDefaultStyles, toCitable, useStyle, type Citable } from '../../services/citations';
+import { findCitables, formatCitations, listStylesJson, loadCitable, registerDefaultStyles, toCitable, useStyle, type Citable } from '../../services/citations';
 
 const styledFormats: CiteFormat[] = ['text', 'html'];
 
@@ -45,7 +45,7 @@ export function citeRouter(): Router {
 
   router.get('/cite/styles', (_req, res) => {
     res.set('Cache-Control', 'public, max-age=3600');
-    res.json({ data: listStyles() });
+    res.type('application/json').send(listStylesJson());
   });
 
   for (const kind of ['excerpt', 'source'] as const) {

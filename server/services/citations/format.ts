@@ -1,4 +1,6 @@
 /** Citation exports: BibTeX, RIS, CSL-JSON, and text/HTML in a CSL style. */
+import { createHash } from 'node:crypto';
+import { LRUCache } from 'lru-cache';
 import type { CiteFormat, FormattedEntry } from '@shared/citations/api';
 import { archiveNote, type CiteItem, type CslItem } from '@shared/citations/csl';
 import { locatorLabels } from '@shared/catalogue/locator';
@@ -17,7 +19,23 @@ export interface FormatResult {
   entries?: FormattedEntry[];
 }
 
+/**
+ * citeproc costs milliseconds per item, and the same approved excerpt is cited again and again.
+ * The result is a pure function of the items, the format and the style, so it is cached under a
+ * hash of exactly those: an edit, a new version or another access date is another key.
+ */
+const formatted = new LRUCache<string, FormatResult>({ max: 2000 });
+
 export function formatCitations(citables: Citable[], format: CiteFormat, styleId: string): FormatResult {
+  const key = createHash('sha256').update(JSON.stringify([format, styleId, citables])).digest('base64url');
+  const cached = formatted.get(key);
+  if (cached) return cached;
+  const result = formatUncached(citables, format, styleId);
+  formatted.set(key, result);
+  return result;
+}
+
+function formatUncached(citables: Citable[], format: CiteFormat, styleId: string): FormatResult {
   const items = citables.map((c) => c.item);
   switch (format) {
     case 'csl-json':

@@ -68,10 +68,10 @@ function asExcerpt(data: Record<string, unknown>): CitableExcerpt {
 /** One excerpt (E…) or source (S…) by public id, or null when it is not citable. */
 export async function findCitable(id: string, version?: number): Promise<CitableTarget | null> {
   if (id.startsWith('E')) {
-    const excerpt = await Excerpt.findOne({ where: { publicId: id } });
+    const excerpt = await Excerpt.findOne({ where: { publicId: id }, include: [{ model: Source, as: 'source' }] });
     if (!excerpt) return null;
     const data = await atVersion('excerpt', excerpt, version);
-    const source = await Source.findByPk(excerpt.sourceId);
+    const source = excerpt.source;
     const sourceData = data && source ? await atVersion('source', source) : null;
     if (!data || !sourceData) return null;
     return { kind: 'excerpt', id, excerpt: asExcerpt(data), source: asSource(sourceData) };

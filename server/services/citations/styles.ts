@@ -27,11 +27,12 @@ interface StyleEntry extends CitationStyle {
   file: string;
 }
 
-let catalogue: { dir: string; styles: Map<string, StyleEntry>; list: CitationStyle[] } | undefined;
+let catalogue: { dir: string; styles: Map<string, StyleEntry>; list: CitationStyle[]; listJson: string } | undefined;
 const registered = new Set<string>();
 
 function stylesDir(): string {
   const dir = getConfig().CSL_STYLES_DIR;
+  if (catalogue?.dir === dir) return dir;
   if (!existsSync(dir)) throw unavailable(`The CSL styles folder ${dir} is missing: install the Debian package citation-style-language-styles.`);
   return dir;
 }
@@ -76,12 +77,18 @@ function styleCatalogue() {
   others.sort((a, b) => a.title.localeCompare(b.title, 'en'));
   for (const entry of others) styles.set(entry.id, entry);
   const list = [...styles.values()].map(({ id, title, kind }) => ({ id, title, kind }));
-  catalogue = { dir, styles, list };
+  // Debian ships thousands of styles: the response body is built once, not per request.
+  catalogue = { dir, styles, list, listJson: JSON.stringify({ data: list }) };
   return catalogue;
 }
 
 export function listStyles(): CitationStyle[] {
   return styleCatalogue().list;
+}
+
+/** `{ data: listStyles() }` as JSON text. */
+export function listStylesJson(): string {
+  return styleCatalogue().listJson;
 }
 
 /**
