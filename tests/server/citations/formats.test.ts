@@ -128,4 +128,13 @@ describe('notes style (CMOS 17 §§14.221–14.231, manuscript collections)', ()
     const { texts } = renderClusters([manuscript.item], [{ items: [{ id: manuscript.item.id, locator: 'sig. B3v', label: 'page' }], noteIndex: 1 }], 'notes', 'text');
     expect(texts[0]).toMatch(/, sig\. B3v,/);
   });
+
+  it('follows a change of the item at once (formatted results are cached by their content)', () => {
+    const before = formatCitations([manuscript], 'text', 'notes').entries![0].note!;
+    const renamed = { ...manuscript, item: { ...manuscript.item, title: 'Inventarium der Blasinstrumente' } };
+    const after = formatCitations([renamed], 'text', 'notes').entries![0].note!;
+    expect(before).toContain('Inventarium der Instrumente der Hofkapelle');
+    expect(after).toContain('Inventarium der Blasinstrumente');
+    expect(formatCitations([manuscript], 'text', 'notes').entries![0].note).toBe(before);
+  });
 });
