@@ -141,7 +141,9 @@ export async function ensureIndex(client: Meilisearch): Promise<boolean> {
   let created = false;
   try {
     const index = await client.getIndex(uid);
-    if (index.primaryKey !== 'id') throw new Error(`Index ${uid} has primary key ${index.primaryKey}, expected id`);
+    // null: a settings update created the index first (Meilisearch does that); it is empty,
+    // and every add of documents names `id`, which then becomes its primary key.
+    if (index.primaryKey !== 'id' && index.primaryKey !== null) throw new Error(`Index ${uid} has primary key ${index.primaryKey}, expected id`);
   } catch (error) {
     if ((error as { cause?: { code?: string } }).cause?.code !== 'index_not_found') throw error;
     const task = await client.createIndex(uid, { primaryKey: 'id' });

@@ -186,6 +186,56 @@ describe('SourceForm', () => {
     expect(patches[1].body).toMatchObject({ title: 'Account book of the Oderstadt chapel', place: 'Oderstadt (court)' });
   });
 
+  it('lets an editor publish a correction to an approved source, with a reason, and asks for one first', async () => {
+    const source = {
+      id: 'S7K2QX9A',
+      title: 'Account book of the chapel',
+      sourceType: 'account',
+      creators: [],
+      date: { edtf: '1701', label: '1701', earliest: '1701-01-01', latest: '1701-12-31' },
+      calendarNote: 'unstated',
+      place: 'Oderstadt',
+      languages: ['de'],
+      holdingInstitution: null,
+      shelfmark: null,
+      publication: null,
+      externalUrl: null,
+      rightsStatement: null,
+      facsimileAccess: 'signed-in',
+      status: 'approved',
+      version: 3,
+    } as unknown as SourceDetail;
+    const calls = stubFetch((call) => {
+      if (call.url === '/api/auth/me') return json({ user: null, csrfToken: 't1', demo: false, mailCapture: false });
+      return json({ data: { ...source, version: 4 }, abilities: {} });
+    });
+    const { onSaved } = renderForm({ source, canPublish: true });
+
+    fireEvent.input(screen.getByLabelText('Title'), { target: { value: 'Account book of the Oderstadt chapel' } });
+    fireEvent.click(screen.getByLabelText('Publish this change at once, without a new review'));
+    fireEvent.click(screen.getByRole('button', { name: 'Save changes' }));
+    const reason = await screen.findByLabelText('Why this change is published without review');
+    await waitFor(() => expect(description(reason)).toMatch(/Say why this change is published without review/));
+    expect(calls.filter((c) => c.method === 'PATCH')).toHaveLength(0);
+
+    fireEvent.input(reason, { target: { value: 'Typo in the title' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Save changes' }));
+    await waitFor(() => expect(onSaved).toHaveBeenCalled());
+    expect(calls.find((c) => c.method === 'PATCH')?.body).toMatchObject({ version: 3, publish: true, reason: 'Typo in the title', title: 'Account book of the Oderstadt chapel' });
+  });
+
+  it('offers no publishing to those who may not, and sends no publish flag', async () => {
+    const calls = stubFetch((call) =>
+      call.url === '/api/auth/me' ? json({ user: null, csrfToken: 't1', demo: false, mailCapture: false }) : json({ data: { ...savedSource, version: 2 }, abilities: {} }),
+    );
+    const source = { ...savedSource, sourceType: 'tutor', date: { edtf: '1695', label: '1695' }, languages: ['en'], creators: [], status: 'approved' } as unknown as SourceDetail;
+    const { onSaved } = renderForm({ source });
+    expect(screen.queryByLabelText('Publish this change at once, without a new review')).toBeNull();
+    fireEvent.click(screen.getByRole('button', { name: 'Save changes' }));
+    await waitFor(() => expect(onSaved).toHaveBeenCalled());
+    expect(calls.find((c) => c.method === 'PATCH')?.body).not.toHaveProperty('publish');
+  });
+
   it('converts an Old Style double date to the Gregorian EDTF', async () => {
     stubFetch(() => json({}));
     renderForm();

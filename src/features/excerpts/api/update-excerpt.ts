@@ -10,10 +10,12 @@ export interface UpdateExcerptInput {
   version: number;
   changes: Partial<ExcerptFields>;
   reason?: string;
+  /** Editors: keep approved material approved, publishing this change without a new review. */
+  publish?: true;
 }
 
-export function updateExcerpt({ id, version, changes, reason }: UpdateExcerptInput): Promise<ExcerptResponse> {
-  return api.patch<ExcerptResponse>(`/api/excerpts/${encodeURIComponent(id)}`, { ...changes, version, reason });
+export function updateExcerpt({ id, version, changes, reason, publish }: UpdateExcerptInput): Promise<ExcerptResponse> {
+  return api.patch<ExcerptResponse>(`/api/excerpts/${encodeURIComponent(id)}`, { ...changes, version, reason, publish });
 }
 
 export function useUpdateExcerpt() {

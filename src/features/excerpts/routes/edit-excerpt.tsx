@@ -37,7 +37,13 @@ export function Component() {
         </>
       }
       title="Edit excerpt"
-      description={data.status === 'approved' ? 'This excerpt is approved: your changes make a new version for review.' : `Version ${data.version}.`}
+      description={
+        data.status !== 'approved'
+          ? `Version ${data.version}.`
+          : abilities.publish
+            ? 'This excerpt is approved: your changes make a new version for review, or, as an editor, you may publish a correction at once.'
+            : 'This excerpt is approved: your changes make a new version for review.'
+      }
     />
   );
   if (!abilities.update) {
@@ -57,6 +63,7 @@ export function Component() {
       key={data.id}
       source={{ id: data.source.id, languages: data.source.languages, dateLabel: data.source.date.label }}
       excerpt={data}
+      canPublish={abilities.publish}
       currentPage={facsimiles.length ? currentPage : null}
       onSaved={(saved) => navigate(`/excerpts/${saved.id}`, { state: { notice: 'Your changes were saved.' } })}
       onCancel={() => navigate(`/excerpts/${data.id}`)}

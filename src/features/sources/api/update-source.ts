@@ -11,10 +11,12 @@ export interface UpdateSourceInput {
   version: number;
   changes: Partial<SourceFields>;
   reason?: string;
+  /** Editors: keep approved material approved, publishing this change without a new review. */
+  publish?: true;
 }
 
-export function updateSource({ id, version, changes, reason }: UpdateSourceInput): Promise<SourceResponse> {
-  return api.patch<SourceResponse>(`/api/sources/${encodeURIComponent(id)}`, { ...changes, version, reason });
+export function updateSource({ id, version, changes, reason, publish }: UpdateSourceInput): Promise<SourceResponse> {
+  return api.patch<SourceResponse>(`/api/sources/${encodeURIComponent(id)}`, { ...changes, version, reason, publish });
 }
 
 export function useUpdateSource() {

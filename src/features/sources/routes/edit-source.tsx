@@ -49,7 +49,9 @@ export function Component() {
         title="Edit source"
         description={
           data.status === 'approved'
-            ? 'This source is approved: your changes make a new version, which readers see once an editor approves it.'
+            ? abilities.publish
+              ? 'This source is approved: your changes make a new version for review, or, as an editor, you may publish a correction at once.'
+              : 'This source is approved: your changes make a new version, which readers see once an editor approves it.'
             : `Version ${data.version}.`
         }
       />
@@ -57,6 +59,7 @@ export function Component() {
         <SourceForm
           key={data.id}
           source={data}
+          canPublish={abilities.publish}
           onSaved={(saved) => navigate(`/sources/${saved.id}`, { state: { notice: 'Your changes were saved.' } })}
           onCancel={() => navigate(`/sources/${data.id}`)}
         />

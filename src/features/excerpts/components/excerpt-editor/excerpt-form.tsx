@@ -5,10 +5,10 @@ import { useQueryClient } from '@tanstack/react-query';
 import { createExcerptSchema, type ExcerptFields } from '@shared/catalogue/schemas';
 import type { ExcerptDetail } from '@shared/catalogue/types';
 import { Button } from '@/components/button';
-import { TextField } from '@/components/text-field';
 import { ConflictNotice } from '@/features/contribute/components/conflict-notice';
 import { DraftPrompt } from '@/features/contribute/components/draft-prompt';
 import { ErrorSummary } from '@/features/contribute/components/error-summary';
+import { RevisionNoteFields, useRevisionNote } from '@/features/contribute/components/revision-note-fields';
 import { SaveBar } from '@/features/contribute/components/save-bar';
 import { flattenErrors } from '@/features/contribute/lib/flatten-errors';
 import { useEditConflict } from '@/features/contribute/lib/use-edit-conflict';
@@ -33,6 +33,8 @@ export interface ExcerptFormProps {
   currentPage: number | null;
   onSaved: (excerpt: ExcerptDetail) => void;
   onCancel?: () => void;
+  /** An editor editing an approved excerpt may publish the change without a new review. */
+  canPublish?: boolean;
 }
 
 /** A translation's language and translator mean nothing without a translation. */
@@ -41,7 +43,7 @@ function toPayload(fields: ExcerptFields): ExcerptFields {
 }
 
 /** Transcribe, translate and tag one passage; same safety as the source form (draft, conflicts, inline messages). */
-export function ExcerptForm({ source, excerpt, currentPage, onSaved, onCancel }: ExcerptFormProps) {
+export function ExcerptForm({ source, excerpt, currentPage, onSaved, onCancel, canPublish = false }: ExcerptFormProps) {
   const queryClient = useQueryClient();
   const form = useForm<ExcerptFormValues, unknown, ExcerptFields>({
     resolver: zodResolver(createExcerptSchema),
@@ -55,7 +57,7 @@ export function ExcerptForm({ source, excerpt, currentPage, onSaved, onCancel }:
   const draft = useFormDraft(form, excerpt ? `excerpt:${excerpt.id}` : `excerpt:new:${source.id}`, { baseVersion: version });
   const create = useCreateExcerpt();
   const update = useUpdateExcerpt();
-  const [reason, setReason] = useState('');
+  const note = useRevisionNote();
   const [attempt, setAttempt] = useState(0);
   const [serverError, setServerError] = useState<unknown>(null);
 
@@ -81,8 +83,9 @@ export function ExcerptForm({ source, excerpt, currentPage, onSaved, onCancel }:
       },
       onError,
     };
-    if (excerpt && version !== null) update.mutate({ id: excerpt.id, version, changes: toPayload(values), reason: reason.trim() || undefined }, done);
-    else create.mutate({ sourceId: source.id, fields: toPayload(values) }, done);
+    if (excerpt && version !== null) {
+      if (note.check()) update.mutate({ id: excerpt.id, version, changes: toPayload(values), ...note.payload() }, done);
+    } else create.mutate({ sourceId: source.id, fields: toPayload(values) }, done);
   };
 
   const reapply = async () => {
@@ -139,15 +142,7 @@ export function ExcerptForm({ source, excerpt, currentPage, onSaved, onCancel }:
         <DateTopicsFields sourceDateLabel={source.dateLabel} />
         <MentionsField defaultLanguage={source.languages[0] ?? 'en'} />
         <PitchTagsField />
-        {excerpt && (
-          <TextField
-            label="What changed, for the revision history"
-            labelSuffix="(optional)"
-            value={reason}
-            onChange={(event) => setReason(event.target.value)}
-            maxLength={500}
-          />
-        )}
+        {excerpt && <RevisionNoteFields note={note} canPublish={canPublish && excerpt.status === 'approved'} />}
         <SaveBar savedAt={draft.savedAt}>
           <Button type="submit" loading={create.isPending || update.isPending}>
             {excerpt ? 'Save changes' : 'Save excerpt'}

@@ -5,10 +5,10 @@ import { useQueryClient } from '@tanstack/react-query';
 import { createSourceSchema, type SourceFields } from '@shared/catalogue/schemas';
 import type { SourceDetail } from '@shared/catalogue/types';
 import { Button } from '@/components/button';
-import { TextField } from '@/components/text-field';
 import { ConflictNotice } from '@/features/contribute/components/conflict-notice';
 import { DraftPrompt } from '@/features/contribute/components/draft-prompt';
 import { ErrorSummary } from '@/features/contribute/components/error-summary';
+import { RevisionNoteFields, useRevisionNote } from '@/features/contribute/components/revision-note-fields';
 import { SaveBar } from '@/features/contribute/components/save-bar';
 import { flattenErrors } from '@/features/contribute/lib/flatten-errors';
 import { useEditConflict } from '@/features/contribute/lib/use-edit-conflict';
@@ -38,10 +38,12 @@ export interface SourceFormProps {
   source?: SourceDetail;
   onSaved: (source: SourceDetail) => void;
   onCancel?: () => void;
+  /** An editor editing an approved source may publish the change without a new review. */
+  canPublish?: boolean;
 }
 
 /** Catalogue a source, or edit one: shared schema, inline messages, a draft kept in the browser, safe on conflicts. */
-export function SourceForm({ source, onSaved, onCancel }: SourceFormProps) {
+export function SourceForm({ source, onSaved, onCancel, canPublish = false }: SourceFormProps) {
   const queryClient = useQueryClient();
   const form = useForm<SourceFormValues, unknown, SourceFields>({
     resolver: zodResolver(createSourceSchema),
@@ -55,7 +57,7 @@ export function SourceForm({ source, onSaved, onCancel }: SourceFormProps) {
   const draft = useFormDraft(form, source ? `source:${source.id}` : 'source:new', { baseVersion: version });
   const create = useCreateSource();
   const update = useUpdateSource();
-  const [reason, setReason] = useState('');
+  const note = useRevisionNote();
   const [attempt, setAttempt] = useState(0);
   const [serverError, setServerError] = useState<unknown>(null);
   const sourceType = useWatch({ control: form.control, name: 'sourceType' });
@@ -86,7 +88,8 @@ export function SourceForm({ source, onSaved, onCancel }: SourceFormProps) {
       onError,
     };
     if (source && version !== null) {
-      update.mutate({ id: source.id, version, changes: payload, reason: reason.trim() || undefined }, done);
+      if (!note.check()) return;
+      update.mutate({ id: source.id, version, changes: payload, ...note.payload() }, done);
     } else {
       create.mutate(payload, done);
     }
@@ -151,15 +154,7 @@ export function SourceForm({ source, onSaved, onCancel }: SourceFormProps) {
         {isPrinted(sourceType) && <PublicationFields />}
         <RightsFields />
 
-        {source && (
-          <TextField
-            label="What changed, for the revision history"
-            labelSuffix="(optional)"
-            value={reason}
-            onChange={(event) => setReason(event.target.value)}
-            maxLength={500}
-          />
-        )}
+        {source && <RevisionNoteFields note={note} canPublish={canPublish && source.status === 'approved'} />}
 
         <SaveBar savedAt={draft.savedAt}>
           <Button type="submit" loading={saving}>
