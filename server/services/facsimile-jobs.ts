@@ -2,7 +2,7 @@
  * Background work for facsimiles, run beside the HTTP server (server/background.ts):
  * extracting text from pending uploads, and sweeping files nothing refers to any more.
  */
-import { readdir, rm, stat } from 'node:fs/promises';
+import { readdir, rm, rmdir, stat } from 'node:fs/promises';
 import { join, resolve } from 'node:path';
 import { Op } from 'sequelize';
 import { Facsimile } from '../models';
@@ -47,6 +47,11 @@ export async function drainExtractionQueue(shouldStop: () => boolean = () => fal
   return done;
 }
 
+/**
+ * Removes files older than `cutoff` under `dir` (never `dir` itself), then the old folders left
+ * empty. A folder goes only through `rmdir`, which refuses one that is not empty, so an upload
+ * that has just put a file into an old folder keeps it.
+ */
 async function removeOldEntries(dir: string, cutoff: number, removed: string[]): Promise<void> {
   let names: string[];
   try {
@@ -58,9 +63,12 @@ async function removeOldEntries(dir: string, cutoff: number, removed: string[]):
     const path = join(dir, name);
     const info = await stat(path).catch(() => null);
     if (!info) continue;
-    if (info.isDirectory()) await removeOldEntries(path, cutoff, removed);
-    if (info.mtimeMs < cutoff) {
-      await rm(path, { recursive: true, force: true });
+    if (info.isDirectory()) {
+      await removeOldEntries(path, cutoff, removed);
+      // Its time as found (removing its files just renewed it); rmdir leaves it if anything is inside.
+      if (info.mtimeMs < cutoff && (await rmdir(path).then(() => true, () => false))) removed.push(path);
+    } else if (info.mtimeMs < cutoff) {
+      await rm(path, { force: true });
       removed.push(path);
     }
   }
@@ -83,7 +91,9 @@ export async function sweepOrphanFiles(options: { olderThanMs?: number } = {}): 
     files.push(key);
   }
   const temp: string[] = [];
-  await removeOldEntries(resolve(getConfig().STORAGE_DIR, '.tmp'), cutoff, temp);
+  // The scratch roots (.tmp/uploads, .tmp/store) stay: uploads make their folders inside them.
+  const scratch = resolve(getConfig().STORAGE_DIR, '.tmp');
+  for (const root of await readdir(scratch).catch(() => [] as string[])) await removeOldEntries(join(scratch, root), cutoff, temp);
   return { files, temp };
 }
 

@@ -1,5 +1,5 @@
 import { describe, it, expect, beforeAll, afterAll } from 'vitest';
-import { mkdtempSync, readdirSync, existsSync, mkdirSync, writeFileSync, utimesSync } from 'node:fs';
+import { mkdtempSync, readdirSync, existsSync, mkdirSync, writeFileSync, utimesSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { anonymous, signedIn, type Client } from '../../support/http';
@@ -247,5 +247,19 @@ describe('sweepOrphanFiles', () => {
     expect(storedKeys()).toContain(kept);
     expect(storedKeys()).not.toContain(orphan);
     expect(existsSync(tempDir)).toBe(false);
+  });
+
+  it('keeps an upload in progress inside an old scratch folder, and the scratch folders themselves', async () => {
+    const uploads = join(storageDir, '.tmp', 'uploads');
+    const fresh = join(uploads, 'req-in-progress');
+    mkdirSync(fresh, { recursive: true });
+    writeFileSync(join(fresh, 'upload.bin'), 'arriving');
+    const old = new Date(Date.now() - 2 * 60 * 60 * 1000);
+    utimesSync(uploads, old, old);
+
+    const swept = await sweepOrphanFiles();
+    expect(swept.temp).toEqual([]);
+    expect(existsSync(join(fresh, 'upload.bin'))).toBe(true);
+    rmSync(fresh, { recursive: true });
   });
 });
