@@ -4,8 +4,8 @@ import { existsSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { getConfig } from './config';
 import { getSequelize } from './db';
-import { sessionMiddleware } from './http/session';
-import { requireCsrfToken } from './http/csrf';
+import { hasSessionCookie, sessionMiddleware } from './http/session';
+import { requireCsrfToken, SAFE_METHODS } from './http/csrf';
 import { errorHandler } from './http/error-handler';
 import { configurePassport } from './auth/passport';
 import { apiRouter } from './routes';
@@ -52,8 +52,14 @@ export function createApp(): Express {
 
   const sequelize = getSequelize();
   const passport = configurePassport();
-  app.use(sessionMiddleware(sequelize, config));
-  app.use(passport.session());
+  const loadSession = sessionMiddleware(sequelize, config);
+  const restoreUser = passport.session();
+  app.use((req, res, next) => {
+    // A read without a session cookie has no session to restore and makes none (only
+    // GET /api/auth/me starts one, for its CSRF token): skip building one to throw away.
+    if (SAFE_METHODS.has(req.method) && req.path !== '/api/auth/me' && !hasSessionCookie(req)) return next();
+    loadSession(req, res, (error?: unknown) => (error ? next(error) : restoreUser(req, res, next)));
+  });
   app.use(requireCsrfToken);
 
   app.use('/api', apiRouter());

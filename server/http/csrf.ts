@@ -2,7 +2,7 @@ import { randomBytes, timingSafeEqual } from 'node:crypto';
 import type { Request, RequestHandler } from 'express';
 import { HttpError } from '../errors';
 
-const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS']);
+export const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS']);
 export const CSRF_HEADER = 'x-csrf-token';
 
 /** The synchronizer token of this session, created on first use (OWASP CSRF Prevention Cheat Sheet). */

@@ -44,6 +44,11 @@ declare module 'express-session' {
 
 export const SESSION_COOKIE = 'windway.sid';
 
+/** Whether the request carries Windway's session cookie (by name; express-session checks its signature). */
+export function hasSessionCookie(req: { headers: { cookie?: string } }): boolean {
+  return (req.headers.cookie ?? '').split(';').some((pair) => pair.trim().startsWith(`${SESSION_COOKIE}=`));
+}
+
 /** Sessions live in MariaDB so app processes stay stateless and survive restarts. */
 export function sessionMiddleware(sequelize: Sequelize, config: Config) {
   const store = throttleTouches(new SequelizeStore({
