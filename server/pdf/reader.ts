@@ -96,7 +96,10 @@ export async function stopPdfReader(): Promise<void> {
   await current?.worker.terminate();
 }
 
-/** The page count, after loading every page once (so a damaged file fails here); stops early past `maxPages`. */
+/**
+ * The page count, after loading every page once (so a damaged file fails here); stops early past
+ * `maxPages`. Takes `data` over: a buffer of its own moves to the thread and is empty afterwards.
+ */
 export function countPdfPages(data: Uint8Array, maxPages: number): Promise<number> {
   return call<number>({ op: 'count', data: ownCopy(data), maxPages });
 }
@@ -108,6 +111,7 @@ export interface OpenPdf {
   close(): Promise<void>;
 }
 
+/** Opens a PDF in the thread for reading page by page; takes `data` over as countPdfPages does. */
 export async function openPdf(data: Uint8Array): Promise<OpenPdf> {
   const { doc, pageCount } = await call<{ doc: number; pageCount: number }>({ op: 'open', data: ownCopy(data) });
   return {

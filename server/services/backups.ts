@@ -64,14 +64,16 @@ export async function createBackup(options: { databaseUrl: string; storageDir: s
   const target = resolve(options.target);
   await mkdir(target, { recursive: true });
   const { database, args, env } = connection(options.databaseUrl);
-  await new Promise<void>((done, fail) => {
-    const dump = spawn('mariadb-dump', [...args, '--single-transaction', '--routines', '--default-character-set=utf8mb4', database], { env });
-    const out = createWriteStream(join(target, 'database.sql'));
-    let errors = '';
-    dump.stderr.on('data', (chunk) => (errors += chunk));
-    dump.stdout.pipe(out);
-    dump.on('exit', (code) => (code === 0 ? out.on('close', () => done()) : fail(new Error(`mariadb-dump failed: ${errors}`))));
+  const dump = spawn('mariadb-dump', [...args, '--single-transaction', '--routines', '--default-character-set=utf8mb4', database], { env });
+  let errors = '';
+  dump.stderr.on('data', (chunk) => (errors += chunk));
+  // Both ends are awaited on their own: the file may be closed before or after the process exits.
+  const exited = new Promise<number | null>((done, fail) => {
+    dump.once('error', fail);
+    dump.once('exit', done);
   });
+  await pipeline(dump.stdout, createWriteStream(join(target, 'database.sql')));
+  if ((await exited) !== 0) throw new Error(`mariadb-dump failed: ${errors}`);
   if (existsSync(options.storageDir)) await cp(options.storageDir, join(target, 'files'), { recursive: true });
   const manifest: BackupManifest = {
     createdAt: new Date().toISOString(),
@@ -97,8 +99,11 @@ export async function restoreBackup(options: { databaseUrl: string; storageDir: 
     const client = spawn('mariadb', [...args, '--default-character-set=utf8mb4', database], { env, stdio: ['pipe', 'ignore', 'pipe'] });
     let errors = '';
     client.stderr.on('data', (chunk) => (errors += chunk));
+    // A client that stops early closes its input; its exit code and stderr tell why, not EPIPE.
+    client.stdin.on('error', () => {});
     createReadStream(join(source, 'database.sql')).pipe(client.stdin);
-    client.on('exit', (code) => (code === 0 ? done() : fail(new Error(`Loading the dump failed: ${errors}`))));
+    client.once('error', fail);
+    client.once('exit', (code) => (code === 0 ? done() : fail(new Error(`Loading the dump failed: ${errors}`))));
   });
   if (existsSync(join(source, 'files'))) {
     if (existsSync(options.storageDir) && (await stat(options.storageDir)).isDirectory() && (await readdir(options.storageDir)).length > 0) {
