@@ -43,6 +43,25 @@ function fillValidSource() {
 
 const savedSource = { id: 'S7K2QX9A', title: 'The Compleat Flute-Master', version: 1 } as SourceDetail;
 
+/** A saved source at version 3, as GET /api/sources/:id gives it. */
+const accountBook = {
+  id: 'S7K2QX9A',
+  title: 'Account book of the chapel',
+  sourceType: 'account',
+  creators: [],
+  date: { edtf: '1701', label: '1701', earliest: '1701-01-01', latest: '1701-12-31' },
+  calendarNote: 'unstated',
+  place: 'Oderstadt',
+  languages: ['de'],
+  holdingInstitution: null,
+  shelfmark: null,
+  publication: null,
+  externalUrl: null,
+  rightsStatement: null,
+  facsimileAccess: 'signed-in',
+  version: 3,
+} as unknown as SourceDetail;
+
 beforeEach(() => {
   clearCsrfToken();
   window.localStorage.clear();
@@ -139,23 +158,7 @@ describe('SourceForm', () => {
   });
 
   it('keeps the person’s text after a 409 and re-applies it on the latest version', async () => {
-    const source = {
-      id: 'S7K2QX9A',
-      title: 'Account book of the chapel',
-      sourceType: 'account',
-      creators: [],
-      date: { edtf: '1701', label: '1701', earliest: '1701-01-01', latest: '1701-12-31' },
-      calendarNote: 'unstated',
-      place: 'Oderstadt',
-      languages: ['de'],
-      holdingInstitution: null,
-      shelfmark: null,
-      publication: null,
-      externalUrl: null,
-      rightsStatement: null,
-      facsimileAccess: 'signed-in',
-      version: 3,
-    } as unknown as SourceDetail;
+    const source = accountBook;
     const latest = { ...source, place: 'Oderstadt (court)', version: 4 };
     const calls = stubFetch((call) => {
       if (call.url === '/api/auth/me') return json({ user: null, csrfToken: 't1', demo: false, mailCapture: false });
@@ -187,24 +190,7 @@ describe('SourceForm', () => {
   });
 
   it('lets an editor publish a correction to an approved source, with a reason, and asks for one first', async () => {
-    const source = {
-      id: 'S7K2QX9A',
-      title: 'Account book of the chapel',
-      sourceType: 'account',
-      creators: [],
-      date: { edtf: '1701', label: '1701', earliest: '1701-01-01', latest: '1701-12-31' },
-      calendarNote: 'unstated',
-      place: 'Oderstadt',
-      languages: ['de'],
-      holdingInstitution: null,
-      shelfmark: null,
-      publication: null,
-      externalUrl: null,
-      rightsStatement: null,
-      facsimileAccess: 'signed-in',
-      status: 'approved',
-      version: 3,
-    } as unknown as SourceDetail;
+    const source = { ...accountBook, status: 'approved' } as SourceDetail;
     const calls = stubFetch((call) => {
       if (call.url === '/api/auth/me') return json({ user: null, csrfToken: 't1', demo: false, mailCapture: false });
       return json({ data: { ...source, version: 4 }, abilities: {} });
