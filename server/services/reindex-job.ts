@@ -1,14 +1,5 @@
 import { reindexAll, type ReindexProgress } from '@search/indexer';
-
-export interface ReindexState {
-  running: boolean;
-  startedAt: string | null;
-  finishedAt: string | null;
-  done: number;
-  total: number;
-  docsPerSecond: number;
-  error: string | null;
-}
+import type { ReindexState } from '@shared/search/reindex';
 
 /** One re-index at a time per app process, run in the background while the app serves. */
 let state: ReindexState = { running: false, startedAt: null, finishedAt: null, done: 0, total: 0, docsPerSecond: 0, error: null };

@@ -5,16 +5,8 @@ import { Card } from '@/components/card';
 import { PageHeader } from '@/components/page-header';
 import { PageSpinner } from '@/components/spinner';
 import { api, errorMessage } from '@/lib/api';
+import type { ReindexState } from '@shared/search/reindex';
 
-interface ReindexState {
-  running: boolean;
-  startedAt: string | null;
-  finishedAt: string | null;
-  done: number;
-  total: number;
-  docsPerSecond: number;
-  error: string | null;
-}
 
 const reindexQuery = () =>
   queryOptions({
