@@ -78,6 +78,23 @@ describe('GET /api/excerpts/:id/cite', () => {
   });
 });
 
+describe('an earlier approved version', () => {
+  it('is cited from its revision, the current one from the row', async () => {
+    const source = await approvedSource();
+    const { client: editor, user } = await signedIn('editor');
+    // Version 1 as an editor's review approved it (the factory writes the row, not the review).
+    const { Review } = await import('@server/models');
+    await Review.create({ entityType: 'source', entityId: source.id, version: 1, editorId: user.id, decision: 'approve', comment: null, fieldComments: [] });
+    const renamed = 'Inventarium der Blasinstrumente der Hofkapelle';
+    const edit = await editor.patch(`/api/sources/${source.publicId}`, { version: 1, title: renamed, publish: true, reason: 'Title as on the cover' });
+    expect(edit.status).toBe(200);
+    const anyone = await anonymous();
+    const cite = async (query: string) => JSON.parse((await anyone.get(`/api/sources/${source.publicId}/cite?format=csl-json${query}`)).text)[0];
+    expect(await cite('&version=1')).toMatchObject({ title: source.title, version: '1' });
+    expect(await cite('')).toMatchObject({ title: renamed, version: '2' });
+  });
+});
+
 describe('GET /api/sources/:id/cite', () => {
   it('cites a printed book (CMOS 17 book form; BibTeX @book per Patashnik)', async () => {
     const client = await anonymous();
