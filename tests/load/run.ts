@@ -109,7 +109,7 @@ try {
       method: 'POST',
       path: '/api/auth/login',
       headers: { 'content-type': 'application/json', cookie, 'x-csrf-token': csrfToken },
-      // A new address every time: the same one would soon meet the sign-in throttle (429).
+      // A new address for each request built: one address tried often would meet the sign-in throttle (429).
       body: JSON.stringify({ email: `nobody-${n++}@load.invalid`, password: 'not the password' }),
     }),
   };
@@ -132,8 +132,10 @@ try {
   const drawKind = () => only ?? (random() * signInEvery < 1 ? 'sign-in' : reads[Math.floor(random() * reads.length)]);
   // Each connection gets its own sequence, drawn at random as independent visitors arrive (in one
   // shared rotation, connections bunch up behind the slow sign-ins). Requests are built before
-  // the run, so autocannon spends its CPU on sending rather than on building them.
-  const perConnection = 200;
+  // the run, so autocannon spends its CPU on sending rather than on building them. A connection
+  // sends about 6 a second and starts its list again at the end: at two per second of the run,
+  // each sign-in address comes round a few times at most, well under the throttle's 10.
+  const perConnection = Math.max(200, seconds * 2);
   const sequences = Array.from({ length: connections }, () => Array.from({ length: perConnection }, () => kinds[drawKind()]()));
 
   // Warm-up, not measured: the JIT, the database pool and citeproc's style engines get going,
